@@ -26,8 +26,12 @@ export const SUBJECTS = [
 ] as const;
 export type SubjectName = (typeof SUBJECTS)[number];
 
-/** A subject may be a type name or a record tagged with one (for conditions such as ownership). */
-export type AppSubject = SubjectName | 'all' | (ForcedSubject<SubjectName> & Record<string, unknown>);
+/** Records whose rules depend on who owns them or whom they are shared with. */
+export type OwnedBom = ForcedSubject<'Bom'> & { ownerId: string; sharedWith: string[] };
+export type OwnedRequirement = ForcedSubject<'Requirement'> & { ownerId: string };
+
+/** A subject is a type name, or a tagged record where a rule has conditions. */
+export type AppSubject = SubjectName | 'all' | OwnedBom | OwnedRequirement;
 export type AppAbility = MongoAbility<[Action, AppSubject]>;
 
 /** The fields of the signed-in person that rules depend on. */

@@ -1,0 +1,71 @@
+import { z } from 'zod';
+
+const EnvSchema = z.object({
+  NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
+  HOST: z.string().default('127.0.0.1'),
+  PORT: z.coerce.number().int().min(1).max(65535).default(3000),
+  DATABASE_URL: z.string().min(1, 'DATABASE_URL is required (npm start sets it)'),
+  APP_URL: z.string().url().optional(),
+  SESSION_SECRET: z.string().min(16).optional(),
+  /** Extra origins allowed to send state-changing requests, comma separated. */
+  ALLOWED_ORIGINS: z.string().default(''),
+  SMTP_HOST: z.string().default('127.0.0.1'),
+  SMTP_PORT: z.coerce.number().int().default(2525),
+  SMTP_SECURE: z.enum(['true', 'false']).default('false'),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASSWORD: z.string().optional(),
+  MAIL_FROM: z.string().default('Understudy <no-reply@understudy.test>'),
+  FAKE_MAIL_API_URL: z.string().url().optional(),
+  FRONTEND_DIST: z.string().optional(),
+  SIGN_IN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
+  SIGN_IN_RATE_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
+});
+
+export interface AppConfig {
+  env: 'development' | 'test' | 'production';
+  host: string;
+  port: number;
+  databaseUrl: string;
+  appUrl: string;
+  sessionSecret: string;
+  allowedOrigins: string[];
+  smtp: { host: string; port: number; secure: boolean; user?: string; password?: string };
+  mailFrom: string;
+  fakeMailApiUrl?: string;
+  frontendDist?: string;
+  signInRateLimit: { limit: number; windowMs: number };
+}
+
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
+  const parsed = EnvSchema.safeParse(env);
+  if (!parsed.success) {
+    const problems = parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; ');
+    throw new Error(`Invalid environment: ${problems}`);
+  }
+  const e = parsed.data;
+  if (e.NODE_ENV === 'production' && !e.SESSION_SECRET) {
+    throw new Error('SESSION_SECRET must be set in production');
+  }
+  const appUrl = e.APP_URL ?? `http://${e.HOST}:${e.PORT}`;
+  return {
+    env: e.NODE_ENV,
+    host: e.HOST,
+    port: e.PORT,
+    databaseUrl: e.DATABASE_URL,
+    appUrl,
+    // Outside production a per-process secret is fine: sessions simply end on restart.
+    sessionSecret: e.SESSION_SECRET ?? `dev-${crypto.randomUUID()}`,
+    allowedOrigins: [new URL(appUrl).origin, ...e.ALLOWED_ORIGINS.split(',').map((s) => s.trim()).filter(Boolean)],
+    smtp: {
+      host: e.SMTP_HOST,
+      port: e.SMTP_PORT,
+      secure: e.SMTP_SECURE === 'true',
+      user: e.SMTP_USER,
+      password: e.SMTP_PASSWORD,
+    },
+    mailFrom: e.MAIL_FROM,
+    fakeMailApiUrl: e.FAKE_MAIL_API_URL,
+    frontendDist: e.FRONTEND_DIST,
+    signInRateLimit: { limit: e.SIGN_IN_RATE_LIMIT, windowMs: e.SIGN_IN_RATE_WINDOW_MINUTES * 60_000 },
+  };
+}

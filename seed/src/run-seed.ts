@@ -1,0 +1,17 @@
+import { createDataSource } from '@understudy/backend/src/data-source';
+import { seedDemoData } from './seed';
+
+if (process.env.NODE_ENV === 'production') {
+  console.error('The demo seed never runs in production.');
+  process.exit(1);
+}
+const url = process.env.DATABASE_URL;
+if (!url) {
+  console.error('DATABASE_URL is not set');
+  process.exit(1);
+}
+const db = createDataSource(url);
+await db.initialize();
+const report = await seedDemoData(db);
+console.log(report.seeded ? `Seeded demo data: ${report.users} demo accounts` : 'Database already has data; demo seed skipped');
+await db.destroy();
