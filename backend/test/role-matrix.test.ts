@@ -1,0 +1,75 @@
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Role } from '@understudy/shared-types';
+import { createTestContext, type TestContext } from './context';
+import { listRoutes } from './list-routes';
+
+/**
+ * Who may call every API route. The first test fails when a route is registered without an entry
+ * here, so nobody adds a route and forgets to decide (and test) who may use it.
+ *   'public'   — anyone, signed in or not
+ *   'signedIn' — any signed-in role
+ *   Role[]     — only these roles; others get 403, signed-out callers 401
+ */
+type Access = 'public' | 'signedIn' | Role[];
+
+const ADMIN: Role[] = ['admin'];
+
+export const ROUTE_ACCESS: Record<string, Access> = {
+  'GET /api/health': 'public',
+  'POST /api/auth/sign-in': 'public',
+  'POST /api/auth/sign-out': 'public',
+  'GET /api/auth/me': 'signedIn',
+  'GET /api/users': ADMIN,
+  'PATCH /api/users/:id': ADMIN,
+  'GET /api/invitations': ADMIN,
+  'POST /api/invitations': ADMIN,
+  'DELETE /api/invitations/:id': ADMIN,
+  'GET /api/invitations/preview': 'public',
+  'POST /api/invitations/accept': 'public',
+  'POST /api/password-resets': 'public',
+  'POST /api/password-resets/complete': 'public',
+  'GET /api/audit-events': ADMIN,
+  'GET /api/outbox': ADMIN,
+};
+
+const SAMPLE_ID = '00000000-0000-4000-8000-000000000000';
+const ROLES: Role[] = ['viewer', 'editor', 'admin'];
+
+let ctx: TestContext;
+beforeAll(async () => {
+  ctx = await createTestContext();
+});
+afterAll(() => ctx.close());
+
+function call(agent: ReturnType<typeof request.agent> | ReturnType<typeof request>, route: string) {
+  const [method, path] = route.split(' ') as [string, string];
+  const url = path.replace(/:id\b/g, SAMPLE_ID);
+  const m = method.toLowerCase() as 'get' | 'post' | 'patch' | 'put' | 'delete';
+  return (agent as ReturnType<typeof request>)[m](url).send({});
+}
+
+describe('role matrix', () => {
+  it('has an access rule for every registered API route, and no stale ones', () => {
+    const registered = listRoutes(ctx.app);
+    expect(registered.length).toBeGreaterThan(10);
+    expect(registered.filter((r) => !(r in ROUTE_ACCESS))).toEqual([]);
+    expect(Object.keys(ROUTE_ACCESS).filter((r) => !registered.includes(r))).toEqual([]);
+  });
+
+  for (const [route, access] of Object.entries(ROUTE_ACCESS)) {
+    it(`${route} — ${Array.isArray(access) ? access.join('/') + ' only' : access}`, async () => {
+      const anonymous = await call(request(ctx.app), route);
+      if (access === 'public') expect([401, 403]).not.toContain(anonymous.status);
+      else expect(anonymous.status).toBe(401);
+
+      for (const role of ROLES) {
+        const { agent } = await ctx.agentFor(role);
+        const res = await call(agent, route);
+        const allowed = access === 'public' || access === 'signedIn' || access.includes(role);
+        if (allowed) expect([401, 403], `${role} should pass ${route}, got ${res.status}`).not.toContain(res.status);
+        else expect(res.status, `${role} should be refused ${route}`).toBe(403);
+      }
+    });
+  }
+});
