@@ -1,0 +1,48 @@
+import { createBrowserRouter, type RouteObject } from 'react-router';
+import { FullPageLoading } from '../components/ui';
+import { RouteErrorBoundary } from './routes/route-error';
+import { RootLayout } from './routes/root-layout';
+
+/** Every page is its own chunk; the shell, guards and error page load with the app. */
+export const routes: RouteObject[] = [
+  {
+    id: 'root',
+    Component: RootLayout,
+    errorElement: <RouteErrorBoundary />,
+    HydrateFallback: () => <FullPageLoading />,
+    children: [
+      { path: 'sign-in', lazy: () => import('./routes/sign-in').then((m) => ({ Component: m.SignInRoute })) },
+      {
+        path: 'forgot-password',
+        lazy: () => import('./routes/forgot-password').then((m) => ({ Component: m.ForgotPasswordRoute })),
+      },
+      {
+        path: 'reset-password',
+        lazy: () => import('./routes/reset-password').then((m) => ({ Component: m.ResetPasswordRoute })),
+      },
+      {
+        path: 'accept-invitation',
+        lazy: () => import('./routes/accept-invitation').then((m) => ({ Component: m.AcceptInvitationRoute })),
+      },
+      {
+        lazy: () => import('./routes/protected-layout').then((m) => ({ Component: m.ProtectedLayout })),
+        children: [
+          { index: true, lazy: () => import('./routes/home').then((m) => ({ Component: m.HomeRoute })) },
+          {
+            path: 'admin/people',
+            lazy: () => import('./routes/admin-people').then((m) => ({ Component: m.AdminPeopleRoute })),
+          },
+          {
+            path: 'admin/outbox',
+            lazy: () => import('./routes/admin-outbox').then((m) => ({ Component: m.AdminOutboxRoute })),
+          },
+        ],
+      },
+      { path: '*', lazy: () => import('./routes/not-found').then((m) => ({ Component: m.NotFoundRoute })) },
+    ],
+  },
+];
+
+export function createAppRouter() {
+  return createBrowserRouter(routes);
+}

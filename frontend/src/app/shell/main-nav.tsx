@@ -1,0 +1,48 @@
+import type { Action, SubjectName } from '@understudy/shared-types';
+import { NavLink } from 'react-router';
+import { cx } from '../../components/ui';
+import { useAppAbility } from '../../lib/ability';
+
+interface NavItem {
+  to: string;
+  label: string;
+  /** What the person must be able to do to see the entry; absent means everyone signed in. */
+  requires?: { action: Action; subject: SubjectName };
+  end?: boolean;
+}
+
+export const NAV_ITEMS: NavItem[] = [
+  { to: '/', label: 'Home', end: true },
+  { to: '/admin/people', label: 'People', requires: { action: 'read', subject: 'User' } },
+  { to: '/admin/outbox', label: 'Outbox', requires: { action: 'read', subject: 'Outbox' } },
+];
+
+export function MainNav({ className }: { className?: string }) {
+  const ability = useAppAbility();
+  const items = NAV_ITEMS.filter((item) => !item.requires || ability.can(item.requires.action, item.requires.subject));
+
+  return (
+    <nav aria-label="Main" className={className}>
+      <ul className="flex items-center gap-1">
+        {items.map((item) => (
+          <li key={item.to}>
+            <NavLink
+              to={item.to}
+              end={item.end}
+              className={({ isActive }) =>
+                cx(
+                  'relative inline-flex h-9 items-center rounded-md px-3 text-sm font-semibold transition-colors',
+                  isActive
+                    ? 'bg-ink text-paper'
+                    : 'text-ink-soft hover:bg-paper-deep hover:text-ink',
+                )
+              }
+            >
+              {item.label}
+            </NavLink>
+          </li>
+        ))}
+      </ul>
+    </nav>
+  );
+}
