@@ -9,5 +9,6 @@ export default defineConfig({
     include: ['src/**/*.test.tsx'],
     restoreMocks: true,
     unstubGlobals: true,
+    testTimeout: 15_000,
   },
 });

@@ -7,3 +7,5 @@ export * from './password-resets';
 export * from './outbox';
 export * from './audit-events';
 export * from './permissions';
+export * from './units';
+export * from './families';

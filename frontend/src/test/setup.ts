@@ -1,6 +1,9 @@
 import '@testing-library/jest-dom/vitest';
-import { cleanup } from '@testing-library/react';
+import { cleanup, configure } from '@testing-library/react';
 import { afterEach, vi } from 'vitest';
+
+// Lazy routes load modules on first visit; on a busy CI machine that can take longer than the 1 s default.
+configure({ asyncUtilTimeout: 5_000 });
 
 // jsdom has no layout, so scrolling (used by the router's scroll restoration) is a no-op here.
 window.scrollTo = vi.fn() as unknown as typeof window.scrollTo;
