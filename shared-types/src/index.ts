@@ -9,3 +9,4 @@ export * from './audit-events';
 export * from './permissions';
 export * from './units';
 export * from './families';
+export * from './parts';

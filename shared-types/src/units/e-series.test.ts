@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { E_SERIES, isPreferredValue, nearestPreferredValue, preferredValuesBetween } from './e-series';
+import { E_SERIES, E_SERIES_TOLERANCE, isPreferredValue, nearestPreferredValue, preferredValuesBetween } from './e-series';
 
 describe('E_SERIES', () => {
   it('IEC 60063: each series has 6, 12, 24, 48 or 96 values per decade, ascending, from 1 up to 10', () => {
@@ -31,6 +31,12 @@ describe('E_SERIES', () => {
     expect(departures).toEqual([2.7, 3.0, 3.3, 3.6, 3.9, 4.3, 4.7, 8.2]);
     // Still within half a step of the ideal geometric ladder.
     E_SERIES.E24.forEach((v, i) => expect(Math.abs(Math.log10(v) * 24 - i)).toBeLessThan(0.5));
+  });
+});
+
+describe('E_SERIES_TOLERANCE', () => {
+  it('IEC 60063 (from memory): E6 ±20 %, E12 ±10 %, E24 ±5 %, E48 ±2 %, E96 ±1 %', () => {
+    expect(E_SERIES_TOLERANCE).toEqual({ E6: 20, E12: 10, E24: 5, E48: 2, E96: 1 });
   });
 });
 

@@ -23,7 +23,7 @@ export const E_SERIES = { E6, E12, E24, E48, E96 } as const;
 export type ESeriesName = keyof typeof E_SERIES;
 export const E_SERIES_NAMES = Object.keys(E_SERIES) as ESeriesName[];
 
-/** Usual tolerance that goes with each series, for labels ("common practice, no source" in the tests). */
+/** Tolerance in percent usually paired with each series, for labels. */
 export const E_SERIES_TOLERANCE: Record<ESeriesName, number> = { E6: 20, E12: 10, E24: 5, E48: 2, E96: 1 };
 
 function decadeValues(series: ESeriesName | readonly number[]): readonly number[] {

@@ -131,7 +131,7 @@ describe('parseQuantity: SI prefixes and unit spellings', () => {
     expect(value('1.5 pA/rtHz')).toEqual({ ok: true, value: 1.5e-12, unit: 'A/√Hz' });
   });
 
-  it('keeps °C, ° and % as written (ISO 80000-5 Celsius temperature; ISO 80000-3 degree; percent = 0.01)', () => {
+  it('keeps °C, ° and % as written (ISO 80000-5 Celsius temperature, ISO 80000-3 degree, ISO 80000-1 percent; from memory)', () => {
     expect(value('-40 °C')).toEqual({ ok: true, value: -40, unit: '°C' });
     expect(value('−40 °C')).toEqual({ ok: true, value: -40, unit: '°C' }); // minus sign U+2212
     expect(value('25 deg C')).toEqual({ ok: true, value: 25, unit: '°C' });
@@ -150,13 +150,13 @@ describe('parseQuantity: SI prefixes and unit spellings', () => {
     expect(value('+15 V').value).toBe(15);
   });
 
-  it('takes a comma as the decimal sign (ISO 80000-1 allows comma or point) and spaces around', () => {
+  it('takes a comma as the decimal sign (ISO 80000-1 allows comma or point, from memory) and spaces around', () => {
     expect(value('4,7k').value).toBe(4700);
     expect(value('  4,7 kΩ  ').value).toBe(4700);
     expect(value('0,47 µF').value).toBe(0.47e-6);
   });
 
-  it('refuses a comma that could be a thousands separator (ISO 80000-1: no comma grouping)', () => {
+  it('refuses a comma that could be a thousands separator (ISO 80000-1 groups digits by spaces only, from memory)', () => {
     const r = parseQuantity('4,700 Ω');
     expect(r.ok).toBe(false);
     if (!r.ok) expect(r.error).toMatch(/thousands/);

@@ -150,13 +150,16 @@ function suggestionsFor(head: Head, suffix: string, expected: CanonicalUnit | un
     .sort((a, b) => b.length - a.length)
     .find((p) => suffix.startsWith(p));
   if (!head.rkm && leading !== undefined) {
-    guess ??= impliedUnit(leading);
-    if (guess !== undefined && UNITS[guess].prefixable) exponent += PREFIXES[leading]!;
+    // "5 k%": the part after the prefix names the unit even though the pair is not valid.
+    guess ??= unitCandidates(suffix.slice(leading.length)).find((c) => c.kind === 'exact')?.unit ?? impliedUnit(leading);
+    if (guess !== undefined && (UNITS[guess].prefixable || guess === '')) exponent += PREFIXES[leading]!;
   }
   const value = toNumber(head.mantissa, exponent, head.negative);
   const sign = head.plusMinus ? '±' : '';
   if (guess === undefined) return [String(value), `a value with a unit, such as ${examplesFor(undefined)[1]}`];
-  return [head.rkm?.text ?? '', sign + formatQuantity(value, guess, { digits: 6 })];
+  // Offer the RKM code back only when it was the unit after it that went wrong.
+  const code = head.rkm && suffix !== '' && UNITS[guess].prefixable ? head.rkm.text : '';
+  return [code, sign + formatQuantity(value, guess, { digits: 6 })];
 }
 
 /** Parsing with the bookkeeping ranges need (whether the unit was written); parseQuantity is the public face. */
@@ -195,6 +198,8 @@ export function parseCore(raw: unknown, opts: ParseOptions = {}): CoreResult {
   } else if (suffix === '') {
     if (head.rkm) {
       unit = expected ?? head.rkm.info.unit;
+      // 4k7 in a percentage or plain-number field: the multiplier letter has nothing to scale.
+      if (!UNITS[unit].prefixable) return fail();
     } else {
       unit = expected ?? '';
       if (expected !== undefined && opts.displayUnit !== undefined) {
@@ -228,7 +233,8 @@ export function parseCore(raw: unknown, opts: ParseOptions = {}): CoreResult {
   if (expected !== undefined && unit !== expected) {
     return { ok: false, error: `expected ${describe(expected)}, got ${unit === '' ? 'a plain number' : unit}` };
   }
-  const value = toNumber(head.mantissa, exponent, head.negative);
+  // + 0 turns -0 into 0.
+  const value = toNumber(head.mantissa, exponent, head.negative) + 0;
   if (!Number.isFinite(value)) return { ok: false, error: `"${input}" is too large to be a real value` };
   return { ok: true, value, unit, plusMinus: head.plusMinus, explicitUnit };
 }

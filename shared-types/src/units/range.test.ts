@@ -2,7 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { parseRange, parseSupplySpan } from './range';
 
 describe('parseRange', () => {
-  // ISO 80000-1 allows "to" or a dash between the ends of a range; the unit may be written once (from memory).
+  // ISO 80000-1 writes a range as "3 V to 32 V" (from memory); dashes, "…" and a unit written once on the
+  // right are common practice, no source.
   it.each([
     ['3 to 32 V', 3, 32, 'V'],
     ['3–32 V', 3, 32, 'V'],
@@ -19,7 +20,7 @@ describe('parseRange', () => {
     ['5 V', 5, 5, 'V'],
     ['100 to 470 nF', 100e-9, 470e-9, 'F'],
     ['1 to 10 mA', 0.001, 0.01, 'A'],
-  ])('ISO 80000-1 range notation: %s', (input, min, max, unit) => {
+  ])('ISO 80000-1 range, "to" form, or common-practice dash: %s', (input, min, max, unit) => {
     expect(parseRange(input)).toEqual({ ok: true, min, max, unit });
   });
 
