@@ -14,9 +14,12 @@ import { rejectCrossSite } from './middleware/same-origin';
 import { auditEventsRouter } from './modules/audit-events/audit-events.router';
 import { authRouter } from './modules/auth/auth.router';
 import { SESSION_COOKIE } from './modules/auth/session';
+import { familiesRouter } from './modules/families/families.router';
 import { healthRouter } from './modules/health/health.router';
 import { invitationsRouter } from './modules/invitations/invitations.router';
+import { manufacturersRouter } from './modules/manufacturers/manufacturers.router';
 import { outboxRouter } from './modules/outbox/outbox.router';
+import { partsRouter } from './modules/parts/parts.router';
 import { passwordResetsRouter } from './modules/password-resets/password-resets.router';
 import { usersRouter } from './modules/users/users.router';
 
@@ -73,6 +76,9 @@ export function createApp({ config, db, mailer }: AppDeps): BuiltApp {
   app.use('/api/password-resets', passwordResetsRouter(db, mailer, config));
   app.use('/api/audit-events', auditEventsRouter(db));
   app.use('/api/outbox', outboxRouter(config));
+  app.use('/api/families', familiesRouter());
+  app.use('/api/manufacturers', manufacturersRouter(db));
+  app.use('/api/parts', partsRouter(db));
   app.use('/api', notFoundApi);
 
   if (config.frontendDist && fs.existsSync(path.join(config.frontendDist, 'index.html'))) {

@@ -1,11 +1,17 @@
 import { AuditEventEntity } from './AuditEvent';
 import { InvitationEntity } from './Invitation';
+import { ManufacturerEntity } from './Manufacturer';
+import { PartEntity } from './Part';
+import { PartRevisionEntity } from './PartRevision';
 import { PasswordResetEntity } from './PasswordReset';
 import { UserEntity } from './User';
 
 export * from './AuditEvent';
 export * from './Invitation';
+export * from './Manufacturer';
+export * from './Part';
+export * from './PartRevision';
 export * from './PasswordReset';
 export * from './User';
 
-export const ENTITIES = [UserEntity, InvitationEntity, PasswordResetEntity, AuditEventEntity];
+export const ENTITIES = [UserEntity, InvitationEntity, PasswordResetEntity, AuditEventEntity, ManufacturerEntity, PartEntity, PartRevisionEntity];

@@ -1,4 +1,5 @@
 import { Foundation1764633600000 } from './1764633600000-foundation';
+import { PartsCatalog1764720000000 } from './1764720000000-parts-catalog';
 
 /** Listed explicitly so tsx, vitest and a bundler all see the same set, in order. */
-export const MIGRATIONS = [Foundation1764633600000];
+export const MIGRATIONS = [Foundation1764633600000, PartsCatalog1764720000000];

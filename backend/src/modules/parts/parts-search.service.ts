@@ -1,0 +1,120 @@
+import type { DataSource } from 'typeorm';
+import { getFamily, partNumberKey, type PartListQuery, type PartListResponse } from '@understudy/shared-types';
+import { ValidationError } from '../../middleware/validate';
+import type { ParsedFilters } from './part-filters';
+import { partFromRow, presentPart } from './parts.presenter';
+
+/** Builds positional SQL parameters as the WHERE clause grows. */
+class Params {
+  readonly values: unknown[] = [];
+  add(value: unknown): string {
+    this.values.push(value);
+    return `$${this.values.length}`;
+  }
+}
+
+const num = (key: string, slot: string) => `(p.parameters->'${key}'->>'${slot}')::float8`;
+/** typ, else min, else max: the one number a column shows and a "between" filter compares. */
+const representative = (key: string) => `COALESCE(${num(key, 'typ')}, ${num(key, 'min')}, ${num(key, 'max')})`;
+
+export interface SearchOptions {
+  /** Skip the page and count; used by export to stream the whole result set. */
+  all?: boolean;
+}
+
+/**
+ * The parametric, typo-tolerant search. Parameter keys come only from the shared definitions (checked by
+ * parseFilters), so interpolating them is safe; every user value travels as a bound parameter.
+ */
+export async function searchParts(db: DataSource, query: PartListQuery, filters: ParsedFilters, options: SearchOptions = {}): Promise<PartListResponse> {
+  const params = new Params();
+  const where: string[] = [];
+  if (query.includeArchived !== '1' && query.includeArchived !== 'true') where.push('NOT p.archived');
+  if (query.family) where.push(`p.family = ${params.add(query.family)}`);
+  if (filters.lifecycles.length) where.push(`p.lifecycle = ANY(${params.add(filters.lifecycles)})`);
+  if (filters.rohs.length) where.push(`p.rohs_status = ANY(${params.add(filters.rohs)})`);
+
+  for (const f of filters.parameters) {
+    const key = f.def.key;
+    if (f.kind === 'choice') {
+      const alternatives = f.values.map((v) => `p.parameters @> ${params.add(JSON.stringify({ [key]: { value: v } }))}::jsonb`);
+      where.push(`(${alternatives.join(' OR ')})`);
+    } else if (f.mode === 'covers') {
+      // The part's range must hold the whole asked range.
+      const low = f.min ?? f.max!;
+      const high = f.max ?? f.min!;
+      where.push(`${num(key, 'min')} <= ${params.add(low)} AND ${num(key, 'max')} >= ${params.add(high)}`);
+    } else {
+      if (f.min !== undefined) where.push(`${representative(key)} >= ${params.add(f.min)}`);
+      if (f.max !== undefined) where.push(`${representative(key)} <= ${params.add(f.max)}`);
+    }
+  }
+
+  let rank = '';
+  const q = query.q?.trim();
+  if (q) {
+    const key = partNumberKey(q);
+    const words = q.toLowerCase();
+    const keyParam = params.add(key);
+    const wordsParam = params.add(words);
+    const textMatch = [
+      key ? `p.part_number_key LIKE '%' || ${keyParam} || '%'` : null,
+      // Trigram similarity forgives a slipped or swapped character in a part number.
+      key.length >= 3 ? `p.part_number_key % ${keyParam}` : null,
+      `p.search_tsv @@ plainto_tsquery('simple', ${wordsParam})`,
+      `lower(m.name) LIKE '%' || ${wordsParam} || '%'`,
+    ].filter(Boolean);
+    where.push(`(${textMatch.join(' OR ')})`);
+    rank = `(p.part_number_key = ${keyParam}) DESC, (p.part_number_key LIKE ${keyParam} || '%') DESC, similarity(p.part_number_key, ${keyParam}) DESC, ts_rank(p.search_tsv, plainto_tsquery('simple', ${wordsParam})) DESC, `;
+  }
+
+  const order = rank + orderBy(query);
+  const whereSql = where.length ? `WHERE ${where.join(' AND ')}` : '';
+  const page = query.page;
+  const pageSize = query.pageSize;
+  const limit = options.all ? '' : `LIMIT ${params.add(pageSize)} OFFSET ${params.add((page - 1) * pageSize)}`;
+  const rows: Record<string, unknown>[] = await db.query(
+    `SELECT p.*, m.name AS manufacturer_name, count(*) OVER () AS total_count
+       FROM parts p JOIN manufacturers m ON m.id = p.manufacturer_id
+       ${whereSql}
+       ORDER BY ${order}
+       ${limit}`,
+    params.values,
+  );
+  let total = rows.length ? Number(rows[0]!.total_count) : 0;
+  if (!rows.length && page > 1 && !options.all) {
+    // Past the last page: still report how many there are.
+    const [{ count }] = await db.query(`SELECT count(*)::int AS count FROM parts p JOIN manufacturers m ON m.id = p.manufacturer_id ${whereSql}`, params.values.slice(0, params.values.length - 2));
+    total = count;
+  }
+  return {
+    items: rows.map((r) => presentPart(partFromRow(r), r.manufacturer_name as string)),
+    total,
+    page,
+    pageSize,
+  };
+}
+
+function orderBy(query: PartListQuery): string {
+  const raw = query.sort ?? 'partNumber';
+  const descending = raw.startsWith('-');
+  const column = descending ? raw.slice(1) : raw;
+  const dir = descending ? 'DESC' : 'ASC';
+  const tie = 'p.part_number_key ASC, p.id ASC';
+  switch (column) {
+    case 'partNumber':
+      return `p.part_number_key ${dir}, p.id ASC`;
+    case 'manufacturer':
+      return `lower(m.name) ${dir}, ${tie}`;
+    case 'lifecycle':
+      return `array_position(ARRAY['active','nrnd','last-time-buy','obsolete']::varchar[], p.lifecycle) ${dir}, ${tie}`;
+    case 'updatedAt':
+      return `p.updated_at ${dir}, ${tie}`;
+    default: {
+      const def = query.family ? getFamily(query.family).parameters.find((p) => p.key === column) : undefined;
+      if (!def) throw new ValidationError([{ path: 'query.sort', message: query.family ? `Cannot sort by "${column}".` : 'Choose a family to sort by a parameter.' }]);
+      const expr = def.kind === 'number' ? representative(def.key) : `p.parameters->'${def.key}'->>'value'`;
+      return `${expr} ${dir} NULLS LAST, ${tie}`;
+    }
+  }
+}
