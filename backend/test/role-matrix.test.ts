@@ -14,6 +14,7 @@ import { listRoutes } from './list-routes';
 type Access = 'public' | 'signedIn' | Role[];
 
 const ADMIN: Role[] = ['admin'];
+const EDITORS: Role[] = ['editor', 'admin'];
 
 export const ROUTE_ACCESS: Record<string, Access> = {
   'GET /api/health': 'public',
@@ -31,6 +32,16 @@ export const ROUTE_ACCESS: Record<string, Access> = {
   'POST /api/password-resets/complete': 'public',
   'GET /api/audit-events': ADMIN,
   'GET /api/outbox': ADMIN,
+  'GET /api/families': 'signedIn',
+  'GET /api/manufacturers': 'signedIn',
+  'GET /api/parts': 'signedIn',
+  'GET /api/parts/export': 'signedIn',
+  'POST /api/parts/import': EDITORS,
+  'POST /api/parts': EDITORS,
+  'GET /api/parts/:id': 'signedIn',
+  'PATCH /api/parts/:id': EDITORS,
+  'DELETE /api/parts/:id': EDITORS,
+  'GET /api/parts/:id/revisions': 'signedIn',
 };
 
 const SAMPLE_ID = '00000000-0000-4000-8000-000000000000';

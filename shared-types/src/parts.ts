@@ -28,19 +28,34 @@ export function partNumberKey(partNumber: string): string {
 
 const PinMapSchema = z.record(z.string().regex(/^\d{1,3}$/, 'Pin numbers are whole numbers'), z.string().trim().min(1).max(24));
 
+/** The editable fields, without defaults: an update sends only what changed. */
 const PartFieldsSchema = z.object({
   manufacturer: z.string().trim().min(1, 'Enter the manufacturer').max(120),
   partNumber: z.string().trim().min(1, 'Enter the part number').max(64),
-  description: z.string().trim().max(2000).default(''),
-  lifecycle: LifecycleSchema.default('active'),
-  rohsStatus: RohsStatusSchema.default('unknown'),
-  rohsNote: z.string().trim().max(500).default(''),
-  package: z.string().trim().max(40).default(''),
+  description: z.string().trim().max(2000),
+  lifecycle: LifecycleSchema,
+  rohsStatus: RohsStatusSchema,
+  rohsNote: z.string().trim().max(500),
+  package: z.string().trim().max(40),
   /** A shared layout key from PIN_LAYOUTS; pinMap then defaults to that layout. */
-  pinLayout: z.string().trim().max(48).nullable().default(null),
-  pinMap: PinMapSchema.default({}),
-  parameters: z.record(z.string(), ParameterValueSchema).default({}),
-  tags: z.array(z.string().trim().min(1).max(40)).max(20).default([]),
+  pinLayout: z.string().trim().max(48).nullable(),
+  pinMap: PinMapSchema,
+  parameters: z.record(z.string(), ParameterValueSchema),
+  tags: z.array(z.string().trim().min(1).max(40)).max(20),
+});
+
+const f = PartFieldsSchema.shape;
+const PartCreateFieldsSchema = z.object({
+  ...f,
+  description: f.description.default(''),
+  lifecycle: f.lifecycle.default('active'),
+  rohsStatus: f.rohsStatus.default('unknown'),
+  rohsNote: f.rohsNote.default(''),
+  package: f.package.default(''),
+  pinLayout: f.pinLayout.default(null),
+  pinMap: f.pinMap.default({}),
+  parameters: f.parameters.default({}),
+  tags: f.tags.default([]),
 });
 
 function checkParameters(family: FamilyKey, parameters: unknown, ctx: z.core.$RefinementCtx) {
@@ -50,7 +65,7 @@ function checkParameters(family: FamilyKey, parameters: unknown, ctx: z.core.$Re
   }
 }
 
-export const PartCreateBodySchema = PartFieldsSchema.extend({ family: FamilyKeySchema }).superRefine((body, ctx) =>
+export const PartCreateBodySchema = PartCreateFieldsSchema.extend({ family: FamilyKeySchema }).superRefine((body, ctx) =>
   checkParameters(body.family, body.parameters, ctx),
 );
 export type PartCreateBody = z.input<typeof PartCreateBodySchema>;

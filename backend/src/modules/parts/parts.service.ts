@@ -68,13 +68,20 @@ function comparable(part: Omit<PartDto, 'id' | 'version' | 'createdAt' | 'update
   return out;
 }
 
+/** JSON with object keys sorted, so {min, max} and {max, min} compare equal. */
+function stableJson(value: unknown): string {
+  return JSON.stringify(value, (_key, v) =>
+    v && typeof v === 'object' && !Array.isArray(v) ? Object.fromEntries(Object.entries(v).sort(([a], [b]) => a.localeCompare(b))) : v,
+  );
+}
+
 export function diffParts(before: Record<string, unknown>, after: Record<string, unknown>): RevisionChange[] {
   const keys = new Set([...Object.keys(before), ...Object.keys(after)]);
   const changes: RevisionChange[] = [];
   for (const field of keys) {
     const a = before[field] ?? null;
     const b = after[field] ?? null;
-    if (JSON.stringify(a) !== JSON.stringify(b)) changes.push({ field, before: a, after: b });
+    if (stableJson(a) !== stableJson(b)) changes.push({ field, before: a, after: b });
   }
   return changes.sort((x, y) => x.field.localeCompare(y.field));
 }
