@@ -27,6 +27,24 @@ export interface SearchOptions {
  * parseFilters), so interpolating them is safe; every user value travels as a bound parameter.
  */
 export async function searchParts(db: DataSource, query: PartListQuery, filters: ParsedFilters, options: SearchOptions = {}): Promise<PartListResponse> {
+  const { sql, values, countSql, countValues } = buildSearchSql(query, filters, options);
+  const rows: Record<string, unknown>[] = await db.query(sql, values);
+  let total = rows.length ? Number(rows[0]!.total_count) : 0;
+  if (!rows.length && query.page > 1 && !options.all) {
+    // Past the last page: still report how many there are.
+    const [{ count }] = await db.query(countSql, countValues);
+    total = count;
+  }
+  return {
+    items: rows.map((r) => presentPart(partFromRow(r), r.manufacturer_name as string)),
+    total,
+    page: query.page,
+    pageSize: query.pageSize,
+  };
+}
+
+/** The SQL behind a search, exposed so the benchmark can time the same statement without the API around it. */
+export function buildSearchSql(query: PartListQuery, filters: ParsedFilters, options: SearchOptions = {}) {
   const params = new Params();
   const where: string[] = [];
   if (query.includeArchived !== '1' && query.includeArchived !== 'true') where.push('NOT p.archived');
@@ -72,26 +90,17 @@ export async function searchParts(db: DataSource, query: PartListQuery, filters:
   const whereSql = where.length ? `WHERE ${where.join(' AND ')}` : '';
   const page = query.page;
   const pageSize = query.pageSize;
+  const countValues = [...params.values];
   const limit = options.all ? '' : `LIMIT ${params.add(pageSize)} OFFSET ${params.add((page - 1) * pageSize)}`;
-  const rows: Record<string, unknown>[] = await db.query(
-    `SELECT p.*, m.name AS manufacturer_name, count(*) OVER () AS total_count
+  return {
+    sql: `SELECT p.*, m.name AS manufacturer_name, count(*) OVER () AS total_count
        FROM parts p JOIN manufacturers m ON m.id = p.manufacturer_id
        ${whereSql}
        ORDER BY ${order}
        ${limit}`,
-    params.values,
-  );
-  let total = rows.length ? Number(rows[0]!.total_count) : 0;
-  if (!rows.length && page > 1 && !options.all) {
-    // Past the last page: still report how many there are.
-    const [{ count }] = await db.query(`SELECT count(*)::int AS count FROM parts p JOIN manufacturers m ON m.id = p.manufacturer_id ${whereSql}`, params.values.slice(0, params.values.length - 2));
-    total = count;
-  }
-  return {
-    items: rows.map((r) => presentPart(partFromRow(r), r.manufacturer_name as string)),
-    total,
-    page,
-    pageSize,
+    values: params.values,
+    countSql: `SELECT count(*)::int AS count FROM parts p JOIN manufacturers m ON m.id = p.manufacturer_id ${whereSql}`,
+    countValues,
   };
 }
 
