@@ -1,0 +1,107 @@
+/**
+ * Search speed on a 100,000-part synthetic catalog: each typical query through the HTTP API (signed in, JSON,
+ * keep-alive) and as the bare SQL the API runs, with p50, p95 and the API/SQL ratio.
+ * Targets on a 2-core machine: API p95 ≤ 50 ms, ratio ≤ 2.
+ */
+import type { AddressInfo } from 'node:net';
+import { PartListQuerySchema } from '@understudy/shared-types';
+import { createApp } from '../src/app';
+import { loadConfig } from '../src/config';
+import { createDataSource } from '../src/data-source';
+import { createMailer } from '../src/mail/mailer';
+import { parseFilters } from '../src/modules/parts/part-filters';
+import { buildSearchSql } from '../src/modules/parts/parts-search.service';
+import { createUser, TEST_PASSWORD } from '../test/factories';
+import { loadSyntheticCatalog } from './load-synthetic';
+
+const N = Number(process.env.BENCH_PARTS ?? 100_000);
+const ITERATIONS = Number(process.env.BENCH_ITERATIONS ?? 60);
+const log = (line: string) => console.log(line);
+
+const config = loadConfig({ ...process.env, NODE_ENV: 'test', SESSION_SECRET: 'bench-session-secret-0123456789', SIGN_IN_RATE_LIMIT: '1000' });
+const db = createDataSource(config.databaseUrl);
+await db.initialize();
+
+const [{ count }] = await db.query(`SELECT count(*)::int AS count FROM parts`);
+if (count !== N || process.env.BENCH_RELOAD === '1') {
+  log(`Loading ${N.toLocaleString('en')} synthetic parts into the scratch database…`);
+  await loadSyntheticCatalog(db, N, log);
+} else {
+  log(`Reusing the scratch database's ${count.toLocaleString('en')} synthetic parts (BENCH_RELOAD=1 reloads).`);
+}
+
+// A real part number from the data, with two characters swapped, for the typo query.
+const [{ part_number: samplePn }] = await db.query(`SELECT part_number FROM parts WHERE family = 'op-amp' ORDER BY part_number_key OFFSET 777 LIMIT 1`);
+const typo = samplePn.length > 4 ? samplePn.slice(0, -2) + samplePn.slice(-1) + samplePn.slice(-2, -1) : samplePn;
+
+const QUERIES: { name: string; query: Record<string, string> }[] = [
+  { name: 'text: part number with a typo', query: { q: typo.toLowerCase() } },
+  { name: 'text: word in descriptions, op amps', query: { q: 'low noise', family: 'op-amp' } },
+  { name: 'text + two ranges', query: { q: samplePn.slice(0, 3), family: 'op-amp', 'supplyVoltage.min': '9 V', 'slewRate.min': '5 V/us' } },
+  { name: 'ranges only: 9 V supply, ≥ 5 V/µs', query: { family: 'op-amp', 'supplyVoltage.min': '9', 'supplyVoltage.max': '9', 'slewRate.min': '5V/us' } },
+  { name: 'ranges only: photoresistors 5k–20k at 10 lux', query: { family: 'photoresistor', 'lightResistance.min': '5k', 'lightResistance.max': '20k' } },
+  { name: 'sort by slew rate, descending', query: { family: 'op-amp', sort: '-slewRate' } },
+  { name: 'deep page (page 400 of op amps)', query: { family: 'op-amp', page: '400', pageSize: '50' } },
+];
+
+const user = await createUser(db, { role: 'viewer', email: `bench-${Date.now()}@example.test` });
+const mailer = createMailer(config);
+const { app, close } = createApp({ config, db, mailer });
+const server = app.listen(0, '127.0.0.1');
+await new Promise((r) => server.once('listening', r));
+const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+const signIn = await fetch(`${base}/api/auth/sign-in`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: user.email, password: TEST_PASSWORD }) });
+const cookie = signIn.headers.get('set-cookie')!.split(';')[0]!;
+
+function percentile(sorted: number[], p: number): number {
+  const i = Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1));
+  return sorted[i]!;
+}
+
+async function time(fn: () => Promise<unknown>): Promise<{ p50: number; p95: number }> {
+  for (let i = 0; i < 5; i++) await fn();
+  const samples: number[] = [];
+  for (let i = 0; i < ITERATIONS; i++) {
+    const t0 = performance.now();
+    await fn();
+    samples.push(performance.now() - t0);
+  }
+  samples.sort((a, b) => a - b);
+  return { p50: percentile(samples, 50), p95: percentile(samples, 95) };
+}
+
+log(`\n${ITERATIONS} timed runs per query after 5 warm-up runs; milliseconds.\n`);
+const header = ['query', 'hits', 'API p50', 'API p95', 'SQL p50', 'SQL p95', 'ratio p50'];
+const rows: string[][] = [];
+let worstP95 = 0;
+let worstRatio = 0;
+for (const { name, query } of QUERIES) {
+  const url = `${base}/api/parts?${new URLSearchParams(query)}`;
+  const first = await fetch(url, { headers: { cookie } });
+  if (!first.ok) throw new Error(`${name}: HTTP ${first.status} ${await first.text()}`);
+  const { total } = (await first.json()) as { total: number };
+  const api = await time(async () => {
+    const res = await fetch(url, { headers: { cookie } });
+    await res.arrayBuffer();
+  });
+  const parsed = PartListQuerySchema.parse(query);
+  const { sql, values } = buildSearchSql(parsed, parseFilters(parsed.family, query));
+  const bare = await time(() => db.query(sql, values));
+  worstP95 = Math.max(worstP95, api.p95);
+  worstRatio = Math.max(worstRatio, api.p50 / bare.p50);
+  rows.push([name, String(total), api.p50.toFixed(1), api.p95.toFixed(1), bare.p50.toFixed(1), bare.p95.toFixed(1), (api.p50 / bare.p50).toFixed(2)]);
+}
+
+const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i]!.length)));
+const line = (cells: string[]) => cells.map((c, i) => (i === 0 ? c.padEnd(widths[i]!) : c.padStart(widths[i]!))).join('  ');
+log(line(header));
+log(widths.map((w) => '-'.repeat(w)).join('  '));
+for (const r of rows) log(line(r));
+log(`\nWorst API p95: ${worstP95.toFixed(1)} ms (target ≤ 50 ms) ${worstP95 <= 50 ? 'met' : 'NOT met'}`);
+log(`Worst API/SQL ratio at p50: ${worstRatio.toFixed(2)} (target ≤ 2) ${worstRatio <= 2 ? 'met' : 'NOT met'}`);
+
+server.close();
+await close();
+mailer.close();
+await db.query(`DELETE FROM users WHERE id = $1`, [user.id]);
+await db.destroy();
