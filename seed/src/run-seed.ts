@@ -13,5 +13,9 @@ if (!url) {
 const db = createDataSource(url);
 await db.initialize();
 const report = await seedDemoData(db);
-console.log(report.seeded ? `Seeded demo data: ${report.users} demo accounts` : 'Database already has data; demo seed skipped');
+console.log(
+  report.users || report.parts
+    ? `Seeded demo data: ${report.users} demo accounts, ${report.parts} catalog parts`
+    : 'Database already has people and parts; demo seed skipped',
+);
 await db.destroy();
