@@ -20,6 +20,7 @@ const suiteTimeoutMs = Number(process.env.UNDERSTUDY_SUITE_TIMEOUT_MINUTES || 8)
 
 const suites = [
   { key: 'shared', name: 'shared-types unit' },
+  { key: 'seed', name: 'seed data' },
   { key: 'backend', name: 'backend (API + database)' },
   { key: 'frontend', name: 'frontend unit' },
   { key: 'e2e', name: 'end-to-end (Chromium)' },
@@ -127,6 +128,7 @@ await main(async () => {
   const e2eUrl = databaseUrl(e2eDb);
 
   await runSuite('shared', () => vitest('shared-types', ['run'], testEnv()));
+  await runSuite('seed', () => vitest('seed', ['run'], testEnv()));
   // DATABASE_URL too, so nothing in the backend tests can fall back to a developer's database.
   await runSuite('backend', () =>
     vitest('backend', ['run'], testEnv({ TEST_DATABASE_URL: testUrl, DATABASE_URL: testUrl })),

@@ -58,7 +58,7 @@ export function createApp({ config, db, mailer }: AppDeps): BuiltApp {
       store: new PgStore({ pool: sessionPool, tableName: 'sessions', createTableIfMissing: false, pruneSessionInterval: 15 * 60 }),
       resave: false,
       saveUninitialized: false,
-      rolling: true,
+      rolling: false,
       cookie: {
         httpOnly: true,
         sameSite: 'lax',

@@ -2,6 +2,7 @@ import type { DataSource } from 'typeorm';
 import { getFamily, partNumberKey, type PartListQuery, type PartListResponse } from '@understudy/shared-types';
 import { ValidationError } from '../../middleware/validate';
 import type { ParsedFilters } from './part-filters';
+import { representativeExpr, slotExpr } from './parameter-index-sql';
 import { partFromRow, presentPart } from './parts.presenter';
 
 /** Builds positional SQL parameters as the WHERE clause grows. */
@@ -13,9 +14,10 @@ class Params {
   }
 }
 
-const num = (key: string, slot: string) => `(p.parameters->'${key}'->>'${slot}')::float8`;
+// The same expressions the parameter indexes are built on (see parameter-index-sql.ts), so the planner uses them.
+const num = (key: string, slot: string) => slotExpr(key, slot).replace('parameters', 'p.parameters');
 /** typ, else min, else max: the one number a column shows and a "between" filter compares. */
-const representative = (key: string) => `COALESCE(${num(key, 'typ')}, ${num(key, 'min')}, ${num(key, 'max')})`;
+const representative = (key: string) => representativeExpr(key).replaceAll('parameters', 'p.parameters');
 
 export interface SearchOptions {
   /** Skip the page and count; used by export to stream the whole result set. */
@@ -28,13 +30,12 @@ export interface SearchOptions {
  */
 export async function searchParts(db: DataSource, query: PartListQuery, filters: ParsedFilters, options: SearchOptions = {}): Promise<PartListResponse> {
   const { sql, values, countSql, countValues } = buildSearchSql(query, filters, options);
-  const rows: Record<string, unknown>[] = await db.query(sql, values);
-  let total = rows.length ? Number(rows[0]!.total_count) : 0;
-  if (!rows.length && query.page > 1 && !options.all) {
-    // Past the last page: still report how many there are.
-    const [{ count }] = await db.query(countSql, countValues);
-    total = count;
-  }
+  // The page and the count run side by side: the page can stop at LIMIT, the count never reads the JSONB documents.
+  const [rows, counted] = await Promise.all([
+    db.query(sql, values) as Promise<Record<string, unknown>[]>,
+    options.all ? Promise.resolve(null) : (db.query(countSql, countValues) as Promise<{ count: number }[]>),
+  ]);
+  const total = counted ? counted[0]!.count : rows.length;
   return {
     items: rows.map((r) => presentPart(partFromRow(r), r.manufacturer_name as string)),
     total,
@@ -80,7 +81,8 @@ export function buildSearchSql(query: PartListQuery, filters: ParsedFilters, opt
       // Trigram similarity forgives a slipped or swapped character in a part number.
       key.length >= 3 ? `p.part_number_key % ${keyParam}` : null,
       `p.search_tsv @@ plainto_tsquery('simple', ${wordsParam})`,
-      `lower(m.name) LIKE '%' || ${wordsParam} || '%'`,
+      // A subquery rather than a join condition, so each branch of the OR can use its own index.
+      `p.manufacturer_id = ANY(ARRAY(SELECT id FROM manufacturers WHERE lower(name) LIKE '%' || ${wordsParam} || '%'))`,
     ].filter(Boolean);
     where.push(`(${textMatch.join(' OR ')})`);
     rank = `(p.part_number_key = ${keyParam}) DESC, (p.part_number_key LIKE ${keyParam} || '%') DESC, similarity(p.part_number_key, ${keyParam}) DESC, ts_rank(p.search_tsv, plainto_tsquery('simple', ${wordsParam})) DESC, `;
@@ -93,13 +95,13 @@ export function buildSearchSql(query: PartListQuery, filters: ParsedFilters, opt
   const countValues = [...params.values];
   const limit = options.all ? '' : `LIMIT ${params.add(pageSize)} OFFSET ${params.add((page - 1) * pageSize)}`;
   return {
-    sql: `SELECT p.*, m.name AS manufacturer_name, count(*) OVER () AS total_count
+    sql: `SELECT p.*, m.name AS manufacturer_name
        FROM parts p JOIN manufacturers m ON m.id = p.manufacturer_id
        ${whereSql}
        ORDER BY ${order}
        ${limit}`,
     values: params.values,
-    countSql: `SELECT count(*)::int AS count FROM parts p JOIN manufacturers m ON m.id = p.manufacturer_id ${whereSql}`,
+    countSql: `SELECT count(*)::int AS count FROM parts p ${whereSql}`,
     countValues,
   };
 }
