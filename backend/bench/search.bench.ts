@@ -39,7 +39,7 @@ const QUERIES: { name: string; query: Record<string, string> }[] = [
   { name: 'text: words in descriptions, op amps', query: { q: 'quad jfet', family: 'op-amp' } },
   { name: 'text + two ranges', query: { q: samplePn.slice(0, 3), family: 'op-amp', 'supplyVoltage.min': '9 V', 'slewRate.min': '5 V/us' } },
   { name: 'ranges only: 9 V supply, ≥ 5 V/µs', query: { family: 'op-amp', 'supplyVoltage.min': '9', 'supplyVoltage.max': '9', 'slewRate.min': '5V/us' } },
-  { name: 'ranges only: photoresistors 5k–20k at 10 lux', query: { family: 'photoresistor', 'lightResistance.min': '5k', 'lightResistance.max': '20k' } },
+  { name: 'ranges only: photocells reaching 10k at 10 lux', query: { family: 'photoresistor', 'lightResistance.min': '10k', 'lightResistance.max': '10k' } },
   { name: 'sort by slew rate, descending', query: { family: 'op-amp', sort: '-slewRate' } },
   { name: 'deep page (page 400 of op amps)', query: { family: 'op-amp', page: '400', pageSize: '50' } },
 ];

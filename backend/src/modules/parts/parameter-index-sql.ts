@@ -15,6 +15,8 @@ export function parameterIndexStatements(definitions: readonly ParameterDefiniti
       out.push({ name: `parts_p_${snake}_max_idx`, sql: `ON parts (${slotExpr(def.key, 'max')})` });
     } else {
       out.push({ name: `parts_p_${snake}_idx`, sql: `ON parts (${representativeExpr(def.key)})` });
+      // A forward scan serves ascending sorts; descending with missing values last needs its own order.
+      out.push({ name: `parts_p_${snake}_desc_idx`, sql: `ON parts (${representativeExpr(def.key)} DESC NULLS LAST)` });
     }
   }
   return out;

@@ -94,12 +94,15 @@ export function buildSearchSql(query: PartListQuery, filters: ParsedFilters, opt
   const pageSize = query.pageSize;
   const countValues = [...params.values];
   const limit = options.all ? '' : `LIMIT ${params.add(pageSize)} OFFSET ${params.add((page - 1) * pageSize)}`;
+  // Find the page's ids first from the narrow indexes, then read only those wide rows (a deep page stays cheap).
+  const joinForSort = order.includes('m.name') ? 'JOIN manufacturers m ON m.id = p.manufacturer_id' : '';
   return {
     sql: `SELECT p.*, m.name AS manufacturer_name
-       FROM parts p JOIN manufacturers m ON m.id = p.manufacturer_id
-       ${whereSql}
-       ORDER BY ${order}
-       ${limit}`,
+       FROM (SELECT ids.id, row_number() OVER () AS ord
+               FROM (SELECT p.id FROM parts p ${joinForSort} ${whereSql} ORDER BY ${order} ${limit}) ids) page
+       JOIN parts p ON p.id = page.id
+       JOIN manufacturers m ON m.id = p.manufacturer_id
+      ORDER BY page.ord`,
     values: params.values,
     countSql: `SELECT count(*)::int AS count FROM parts p ${whereSql}`,
     countValues,
