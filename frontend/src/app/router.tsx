@@ -28,6 +28,11 @@ export const routes: RouteObject[] = [
         lazy: () => import('./routes/protected-layout').then((m) => ({ Component: m.ProtectedLayout })),
         children: [
           { index: true, lazy: () => import('./routes/home').then((m) => ({ Component: m.HomeRoute })) },
+          { path: 'parts', lazy: () => import('./routes/parts-catalog').then((m) => ({ Component: m.PartsCatalogRoute })) },
+          { path: 'parts/new', lazy: () => import('./routes/part-new').then((m) => ({ Component: m.PartNewRoute })) },
+          { path: 'parts/:id', lazy: () => import('./routes/part-detail').then((m) => ({ Component: m.PartDetailRoute })) },
+          { path: 'parts/:id/edit', lazy: () => import('./routes/part-edit').then((m) => ({ Component: m.PartEditRoute })) },
+          { path: 'compare', lazy: () => import('./routes/compare').then((m) => ({ Component: m.CompareRoute })) },
           {
             path: 'admin/people',
             lazy: () => import('./routes/admin-people').then((m) => ({ Component: m.AdminPeopleRoute })),

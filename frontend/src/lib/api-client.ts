@@ -13,6 +13,8 @@ export class ApiClientError extends Error {
   readonly issues: FieldIssue[];
   /** Seconds the server asked us to wait (from Retry-After), when it said. */
   readonly retryAfterSeconds: number | null;
+  /** The whole error body, for answers that carry more than the error (a 409 sends the current record). */
+  readonly payload: unknown;
 
   constructor(init: {
     status: number;
@@ -20,6 +22,7 @@ export class ApiClientError extends Error {
     message: string;
     issues?: FieldIssue[];
     retryAfterSeconds?: number | null;
+    payload?: unknown;
   }) {
     super(init.message);
     this.name = 'ApiClientError';
@@ -27,6 +30,7 @@ export class ApiClientError extends Error {
     this.code = init.code;
     this.issues = init.issues ?? [];
     this.retryAfterSeconds = init.retryAfterSeconds ?? null;
+    this.payload = init.payload;
   }
 }
 
@@ -75,7 +79,8 @@ async function readJson(response: Response): Promise<unknown> {
   }
 }
 
-function buildUrl(path: string, query?: Record<string, string | undefined>): string {
+/** The address of an API path with its query, for links (downloads) as well as fetches. */
+export function apiUrl(path: string, query?: Record<string, string | undefined>): string {
   const url = `/api${path}`;
   if (!query) return url;
   const params = new URLSearchParams();
@@ -96,7 +101,7 @@ export async function apiRequest<S extends z.ZodType | undefined = undefined>(
 
   let response: Response;
   try {
-    response = await fetch(buildUrl(path, query), {
+    response = await fetch(apiUrl(path, query), {
       method,
       headers,
       credentials: 'same-origin',
@@ -124,6 +129,7 @@ export async function apiRequest<S extends z.ZodType | undefined = undefined>(
         : (FALLBACK_MESSAGES[response.status] ?? 'Something went wrong on our side. Try again in a moment.'),
       issues: parsed.success ? parsed.data.error.issues : undefined,
       retryAfterSeconds: parseRetryAfter(response.headers.get('Retry-After')),
+      payload,
     });
   }
 

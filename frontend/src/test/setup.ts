@@ -10,4 +10,7 @@ window.scrollTo = vi.fn() as unknown as typeof window.scrollTo;
 
 afterEach(() => {
   cleanup();
+  // Column choices and the comparison list live in web storage; each test starts from a fresh browser.
+  window.localStorage.clear();
+  window.sessionStorage.clear();
 });

@@ -14,16 +14,16 @@ async function navLinks(role: Role) {
 }
 
 describe('navigation by role', () => {
-  it('shows a viewer Home only', async () => {
-    expect(await navLinks('viewer')).toEqual(['Home']);
+  it('shows a viewer Home and the Catalog', async () => {
+    expect(await navLinks('viewer')).toEqual(['Home', 'Catalog']);
   });
 
-  it('shows an editor Home only', async () => {
-    expect(await navLinks('editor')).toEqual(['Home']);
+  it('shows an editor Home and the Catalog', async () => {
+    expect(await navLinks('editor')).toEqual(['Home', 'Catalog']);
   });
 
-  it('shows an admin People and Outbox', async () => {
-    expect(await navLinks('admin')).toEqual(['Home', 'People', 'Outbox']);
+  it('shows an admin People and Outbox as well', async () => {
+    expect(await navLinks('admin')).toEqual(['Home', 'Catalog', 'People', 'Outbox']);
   });
 
   it('sends a signed-out visitor to sign in, remembering the page', async () => {

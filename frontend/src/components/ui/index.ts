@@ -9,3 +9,6 @@ export * from './field';
 export * from './logo';
 export * from './spinner';
 export * from './states';
+export * from './part-badges';
+export * from './pinout-diagram';
+export * from './cadmium-caution';
