@@ -41,6 +41,7 @@ export const ROUTE_ACCESS: Record<string, Access> = {
   'GET /api/parts/:id': 'signedIn',
   'PATCH /api/parts/:id': EDITORS,
   'DELETE /api/parts/:id': EDITORS,
+  'POST /api/parts/:id/restore': EDITORS,
   'GET /api/parts/:id/revisions': 'signedIn',
 };
 

@@ -84,6 +84,14 @@ export function partsRouter(db: DataSource): Router {
     }),
   );
 
+  router.post(
+    '/:id/restore',
+    authorize('archive', 'Part'),
+    ...validate({ params: IdParamsSchema }, async ({ params }, req, res) => {
+      res.json(await setArchived(db, req.user!.id, params.id, false));
+    }),
+  );
+
   router.get(
     '/:id/revisions',
     authorize('read', 'Part'),

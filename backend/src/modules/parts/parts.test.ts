@@ -135,6 +135,11 @@ describe('editing', () => {
     expect(numbers(await viewer.get('/api/parts').query({ family: 'op-amp', includeArchived: '1' }))).toContain('OD-10V');
     await viewer.get(`/api/parts/${id}`).expect(200);
     await viewer.delete(`/api/parts/${id}`).expect(403);
+    await viewer.post(`/api/parts/${id}/restore`).expect(403);
+    const restored = await editor.post(`/api/parts/${id}/restore`).expect(200);
+    expect(restored.body.archived).toBe(false);
+    const [latest] = (await viewer.get(`/api/parts/${id}/revisions`)).body.items;
+    expect(latest).toMatchObject({ source: 'restored', changes: [{ field: 'archived', before: true, after: false }] });
   });
 });
 
