@@ -55,7 +55,8 @@ export function createApp({ config, db, mailer }: AppDeps): BuiltApp {
     session({
       name: SESSION_COOKIE,
       secret: config.sessionSecret,
-      store: new PgStore({ pool: sessionPool, tableName: 'sessions', createTableIfMissing: false, pruneSessionInterval: 15 * 60 }),
+      // Sessions last a fixed week from sign-in, so there is no need to write the row on every request.
+      store: new PgStore({ pool: sessionPool, tableName: 'sessions', createTableIfMissing: false, pruneSessionInterval: 15 * 60, disableTouch: true }),
       resave: false,
       saveUninitialized: false,
       rolling: false,
