@@ -29,6 +29,10 @@ export const routes: RouteObject[] = [
         children: [
           { index: true, lazy: () => import('./routes/home').then((m) => ({ Component: m.HomeRoute })) },
           { path: 'parts', lazy: () => import('./routes/parts-catalog').then((m) => ({ Component: m.PartsCatalogRoute })) },
+          {
+            path: 'parts/import',
+            lazy: () => import('./routes/parts-import').then((m) => ({ Component: m.PartsImportRoute })),
+          },
           { path: 'parts/new', lazy: () => import('./routes/part-new').then((m) => ({ Component: m.PartNewRoute })) },
           { path: 'parts/:id', lazy: () => import('./routes/part-detail').then((m) => ({ Component: m.PartDetailRoute })) },
           { path: 'parts/:id/edit', lazy: () => import('./routes/part-edit').then((m) => ({ Component: m.PartEditRoute })) },

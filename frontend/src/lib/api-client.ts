@@ -43,6 +43,8 @@ type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
 interface RequestOptions<S extends z.ZodType | undefined> {
   method?: Method;
   body?: unknown;
+  /** A body sent as is (a file's text), with its own content type, instead of JSON. */
+  rawBody?: { text: string; contentType: string };
   query?: Record<string, string | undefined>;
   /** The shared schema the response must satisfy; omit for empty (204) responses. */
   schema?: S;
@@ -95,9 +97,10 @@ export async function apiRequest<S extends z.ZodType | undefined = undefined>(
   path: string,
   options: RequestOptions<S> = {},
 ): Promise<Result<S>> {
-  const { method = 'GET', body, query, schema, signal } = options;
+  const { method = 'GET', body, rawBody, query, schema, signal } = options;
   const headers: Record<string, string> = { Accept: 'application/json' };
-  if (body !== undefined) headers['Content-Type'] = 'application/json';
+  if (rawBody) headers['Content-Type'] = rawBody.contentType;
+  else if (body !== undefined) headers['Content-Type'] = 'application/json';
 
   let response: Response;
   try {
@@ -105,7 +108,7 @@ export async function apiRequest<S extends z.ZodType | undefined = undefined>(
       method,
       headers,
       credentials: 'same-origin',
-      body: body === undefined ? undefined : JSON.stringify(body),
+      body: rawBody ? rawBody.text : body === undefined ? undefined : JSON.stringify(body),
       signal,
     });
   } catch (cause) {

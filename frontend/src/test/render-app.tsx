@@ -5,7 +5,23 @@ import { vi } from 'vitest';
 import { AppProvider, createAppQueryClient } from '../app/provider';
 import { routes } from '../app/router';
 
-type Handler = (request: { method: string; path: string; body: unknown }) => Response | Promise<Response>;
+type Handler = (request: {
+  method: string;
+  path: string;
+  /** The parsed JSON body, or the raw text when the body is not JSON (an uploaded CSV). */
+  body: unknown;
+  query: URLSearchParams;
+  headers: Headers;
+}) => Response | Promise<Response>;
+
+function readBody(body: RequestInit['body']): unknown {
+  if (typeof body !== 'string') return undefined;
+  try {
+    return JSON.parse(body) as unknown;
+  } catch {
+    return body;
+  }
+}
 
 export function json(status: number, body?: unknown, headers: Record<string, string> = {}): Response {
   return new Response(body === undefined ? null : JSON.stringify(body), {
@@ -24,10 +40,10 @@ export function stubApi(handlers: Record<string, Handler>) {
   const fetchMock = vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
     const url = new URL(typeof input === 'string' ? input : input instanceof URL ? input.href : input.url, 'http://localhost');
     const method = (init?.method ?? 'GET').toUpperCase();
-    const body = typeof init?.body === 'string' ? (JSON.parse(init.body) as unknown) : undefined;
+    const body = readBody(init?.body);
     const handler = handlers[`${method} ${url.pathname}`];
     if (!handler) return json(404, { error: { code: 'not_found', message: `No stub for ${method} ${url.pathname}` } });
-    return handler({ method, path: url.pathname, body });
+    return handler({ method, path: url.pathname, body, query: url.searchParams, headers: new Headers(init?.headers) });
   });
   vi.stubGlobal('fetch', fetchMock);
   return fetchMock;

@@ -8,6 +8,18 @@ configure({ asyncUtilTimeout: 5_000 });
 // jsdom has no layout, so scrolling (used by the router's scroll restoration) is a no-op here.
 window.scrollTo = vi.fn() as unknown as typeof window.scrollTo;
 
+// jsdom's Blob lacks text(); the import page reads chosen files with it, as browsers allow.
+if (typeof Blob.prototype.text !== 'function') {
+  Blob.prototype.text = function text(this: Blob) {
+    return new Promise<string>((resolve, reject) => {
+      const reader = new FileReader();
+      reader.onload = () => resolve(String(reader.result));
+      reader.onerror = () => reject(reader.error);
+      reader.readAsText(this);
+    });
+  };
+}
+
 afterEach(() => {
   cleanup();
   // Column choices and the comparison list live in web storage; each test starts from a fresh browser.

@@ -2,6 +2,8 @@ import type { CurrentUser } from '@understudy/shared-types';
 import type { ReactNode } from 'react';
 import { Link } from 'react-router';
 import { Wordmark } from '../../components/ui';
+import { QuickFind } from '../../features/quick-find/components/quick-find';
+import { Can } from '../../lib/ability';
 import { AccountMenu } from './account-menu';
 import { MainNav } from './main-nav';
 
@@ -20,6 +22,9 @@ export function AppShell({ user, children }: { user: CurrentUser; children: Reac
             <Wordmark compact />
           </Link>
           <MainNav className="min-w-0 flex-1 overflow-x-auto" />
+          <Can I="read" a="Part">
+            <QuickFind className="w-36 shrink-0 sm:w-56" />
+          </Can>
           <AccountMenu user={user} />
         </div>
       </header>

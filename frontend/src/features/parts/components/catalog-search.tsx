@@ -359,6 +359,11 @@ export function CatalogSearch() {
                   <a href={apiUrl('/parts/export', exportQuery(query, 'csv'))} download className={buttonClasses('secondary', 'sm')}>
                     Export CSV
                   </a>
+                  <Can I="create" a="Part">
+                    <Link to="/parts/import" className={buttonClasses('secondary', 'sm')}>
+                      Import
+                    </Link>
+                  </Can>
                   <Button size="sm" disabled={compare.items.length < 2} onClick={() => void navigate(compareHref)}>
                     Compare ({compare.items.length})
                   </Button>
