@@ -1,7 +1,6 @@
 import { Foundation1764633600000 } from './1764633600000-foundation';
 import { PartsCatalog1764720000000 } from './1764720000000-parts-catalog';
-import { ParameterIndexes1764723600000 } from './1764723600000-parameter-indexes';
-import { SearchPagingIndexes1764727200000 } from './1764727200000-search-paging-indexes';
+import { ParameterColumns1764723600000 } from './1764723600000-parameter-columns';
 
 /** Listed explicitly so tsx, vitest and a bundler all see the same set, in order. */
-export const MIGRATIONS = [Foundation1764633600000, PartsCatalog1764720000000, ParameterIndexes1764723600000, SearchPagingIndexes1764727200000];
+export const MIGRATIONS = [Foundation1764633600000, PartsCatalog1764720000000, ParameterColumns1764723600000];

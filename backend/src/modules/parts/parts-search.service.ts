@@ -2,7 +2,7 @@ import type { DataSource } from 'typeorm';
 import { getFamily, partNumberKey, type PartListQuery, type PartListResponse } from '@understudy/shared-types';
 import { ValidationError } from '../../middleware/validate';
 import type { ParsedFilters } from './part-filters';
-import { representativeExpr, slotExpr } from './parameter-index-sql';
+import { parameterSql } from './parameter-index-sql';
 import { partFromRow, presentPart } from './parts.presenter';
 
 /** Builds positional SQL parameters as the WHERE clause grows. */
@@ -14,10 +14,7 @@ class Params {
   }
 }
 
-// The same expressions the parameter indexes are built on (see parameter-index-sql.ts), so the planner uses them.
-const num = (key: string, slot: string) => slotExpr(key, slot).replace('parameters', 'p.parameters');
-/** typ, else min, else max: the one number a column shows and a "between" filter compares. */
-const representative = (key: string) => representativeExpr(key).replaceAll('parameters', 'p.parameters');
+
 
 export interface SearchOptions {
   /** Skip the page and count; used by export to stream the whole result set. */
@@ -75,10 +72,11 @@ export function buildSearchSql(query: PartListQuery, filters: ParsedFilters, opt
       // The part's range must hold the whole asked range.
       const low = f.min ?? f.max!;
       const high = f.max ?? f.min!;
-      where.push(`${num(key, 'min')} <= ${params.add(low)} AND ${num(key, 'max')} >= ${params.add(high)}`);
+      where.push(`${parameterSql(f.def, 'min')} <= ${params.add(low)} AND ${parameterSql(f.def, 'max')} >= ${params.add(high)}`);
     } else {
-      if (f.min !== undefined) where.push(`${representative(key)} >= ${params.add(f.min)}`);
-      if (f.max !== undefined) where.push(`${representative(key)} <= ${params.add(f.max)}`);
+      // typ, else min, else max: the one number a column shows and a "between" filter compares.
+      if (f.min !== undefined) where.push(`${parameterSql(f.def, 'rep')} >= ${params.add(f.min)}`);
+      if (f.max !== undefined) where.push(`${parameterSql(f.def, 'rep')} <= ${params.add(f.max)}`);
     }
   }
 
@@ -139,7 +137,7 @@ function orderBy(query: PartListQuery): string {
     default: {
       const def = query.family ? getFamily(query.family).parameters.find((p) => p.key === column) : undefined;
       if (!def) throw new ValidationError([{ path: 'query.sort', message: query.family ? `Cannot sort by "${column}".` : 'Choose a family to sort by a parameter.' }]);
-      const expr = def.kind === 'number' ? representative(def.key) : `p.parameters->'${def.key}'->>'value'`;
+      const expr = def.kind === 'number' ? parameterSql(def, 'rep') : `p.parameters->'${def.key}'->>'value'`;
       return `${expr} ${dir} NULLS LAST, ${tie}`;
     }
   }
