@@ -1,5 +1,6 @@
 import type { CurrentUser } from '@understudy/shared-types';
-import { useEffect, useId, useRef, useState } from 'react';
+import { useEffect, useId, useRef, useState, useCallback } from 'react';
+import { useDismissable } from '../../hooks/use-dismissable';
 import { Button, RoleBadge } from '../../components/ui';
 import { useSignOut } from '../../features/auth/api/sign-out';
 
@@ -21,24 +22,10 @@ export function AccountMenu({ user }: { user: CurrentUser }) {
   const signOutRef = useRef<HTMLButtonElement>(null);
   const signOut = useSignOut();
 
+  const close = useCallback(() => setOpen(false), []);
+  useDismissable(open, close, rootRef, buttonRef);
   useEffect(() => {
-    if (!open) return;
-    signOutRef.current?.focus();
-    function onPointerDown(event: PointerEvent) {
-      if (!rootRef.current?.contains(event.target as Node)) setOpen(false);
-    }
-    function onKeyDown(event: KeyboardEvent) {
-      if (event.key === 'Escape') {
-        setOpen(false);
-        buttonRef.current?.focus();
-      }
-    }
-    document.addEventListener('pointerdown', onPointerDown);
-    document.addEventListener('keydown', onKeyDown);
-    return () => {
-      document.removeEventListener('pointerdown', onPointerDown);
-      document.removeEventListener('keydown', onKeyDown);
-    };
+    if (open) signOutRef.current?.focus();
   }, [open]);
 
 

@@ -1,6 +1,7 @@
 import type { VisibilityState } from '@tanstack/react-table';
 import type { FamilyDefinition } from '@understudy/shared-types';
-import { useEffect, useId, useRef, useState } from 'react';
+import { useId, useRef, useState, useCallback } from 'react';
+import { useDismissable } from '../../../hooks/use-dismissable';
 import { Button } from '../../../components/ui';
 import { optionalColumns } from '../hooks/use-column-visibility';
 
@@ -23,24 +24,8 @@ export function ColumnChooser({
   const columns = optionalColumns(family);
   const shown = columns.filter((c) => visibility[c.id]).length;
 
-  useEffect(() => {
-    if (!open) return;
-    function onPointerDown(event: PointerEvent) {
-      if (!rootRef.current?.contains(event.target as Node)) setOpen(false);
-    }
-    function onKeyDown(event: KeyboardEvent) {
-      if (event.key === 'Escape') {
-        setOpen(false);
-        buttonRef.current?.focus();
-      }
-    }
-    document.addEventListener('pointerdown', onPointerDown);
-    document.addEventListener('keydown', onKeyDown);
-    return () => {
-      document.removeEventListener('pointerdown', onPointerDown);
-      document.removeEventListener('keydown', onKeyDown);
-    };
-  }, [open]);
+  const close = useCallback(() => setOpen(false), []);
+  useDismissable(open, close, rootRef, buttonRef);
 
   return (
     <div ref={rootRef} className="relative">
