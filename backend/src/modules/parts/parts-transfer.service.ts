@@ -21,20 +21,9 @@ const PARAM_PREFIX = 'param:';
 
 /** The portable form of a part: what import takes, export gives, and the seed is written in. */
 export function toPortable(part: PartDto): PartCreateBody {
-  return {
-    family: part.family,
-    manufacturer: part.manufacturer.name,
-    partNumber: part.partNumber,
-    description: part.description,
-    lifecycle: part.lifecycle,
-    rohsStatus: part.rohsStatus,
-    rohsNote: part.rohsNote,
-    package: part.package,
-    pinLayout: part.pinLayout,
-    pinMap: part.pinMap,
-    parameters: part.parameters,
-    tags: part.tags,
-  };
+  // Everything but the server's own bookkeeping; the manufacturer travels by name.
+  const { id: _id, version: _version, archived: _archived, createdAt: _c, updatedAt: _u, manufacturer, ...fields } = part;
+  return { ...fields, manufacturer: manufacturer.name };
 }
 
 /** Parameter columns in the shared definitions' order, so exports of the same catalog always line up. */
