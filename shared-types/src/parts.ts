@@ -170,6 +170,14 @@ export function numericFilterMode(slots: readonly string[] | undefined): Numeric
   return s.includes('min') && s.includes('max') && !s.includes('typ') ? 'covers' : 'between';
 }
 
+/**
+ * A voltage given as a range is a supply span: "±4.5 V" is typed for it and means 9 V between the rails. Read off the
+ * definition (a range in volts) so the search form and the server agree.
+ */
+export function isSupplySpan(def: { kind: string; unit?: string; slots?: readonly string[] }): boolean {
+  return def.kind === 'number' && def.unit === 'V' && numericFilterMode(def.slots) === 'covers';
+}
+
 export function representativeValue(v: { min?: number; typ?: number; max?: number } | undefined): number | undefined {
   return v?.typ ?? v?.min ?? v?.max;
 }

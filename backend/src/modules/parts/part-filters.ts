@@ -1,5 +1,6 @@
 import {
   getFamily,
+  isSupplySpan,
   LIFECYCLES,
   numericFilterMode,
   parseQuantity,
@@ -108,7 +109,7 @@ export function parseFilters(family: FamilyKey | undefined, raw: Record<string, 
 
 function readNumber(def: ParameterDefinition, text: string): number | string {
   // A supply filter may be typed as a dual supply: ±4.5 V means a 9 V span.
-  if (def.key === 'supplyVoltage' && /±|\+\/-/.test(text)) {
+  if (isSupplySpan(def) && /±|\+\/-/.test(text)) {
     const span = parseSupplySpan(text);
     return span.ok ? span.max : span.error;
   }

@@ -6,6 +6,7 @@ import {
   ROHS_STATUSES,
   formatQuantity,
   isFamilyKey,
+  isSupplySpan,
   numericFilterMode,
   parseQuantity,
   parseRange,
@@ -51,10 +52,6 @@ export function isCoversParameter(def: ParameterDefinition): boolean {
   return def.kind === 'number' && numericFilterMode(def.slots) === 'covers';
 }
 
-/** A supply span takes "±4.5 V" as 9 V between the rails. */
-export function isSupplySpan(def: ParameterDefinition): boolean {
-  return isCoversParameter(def) && def.unit === 'V';
-}
 
 /** How the filter reads in words: "runs on" for a supply, "covers" for other ranges. */
 export function coversVerb(def: ParameterDefinition): string {
