@@ -7,17 +7,14 @@ import {
   CadmiumCaution,
   Card,
   ConfirmDialog,
-  EmptyState,
-  ErrorState,
   LifecycleBadge,
-  LoadingState,
   PinoutDiagram,
   RohsBadge,
   SectionHeading,
   buttonClasses,
 } from '../../../components/ui';
 import { Can } from '../../../lib/ability';
-import { isApiClientError } from '../../../lib/api-client';
+import { PartQueryState } from './part-query-state';
 import { formatDate } from '../../../lib/format';
 import { containsCadmium, effectivePins, pinLayoutFor } from '../../../lib/part-display';
 import { useArchivePart } from '../api/archive-part';
@@ -86,26 +83,10 @@ export function PartView({ id }: { id: string }) {
   const location = useLocation();
   const justSaved = !!(location.state && typeof location.state === 'object' && 'saved' in location.state);
 
-  if (part.isPending) return <LoadingState label="Loading part…" />;
-  if (part.isError) {
-    if (isApiClientError(part.error) && part.error.status === 404) {
-      return (
-        <EmptyState
-          title="There is no such part"
-          action={
-            <Link to="/parts" className={buttonClasses('secondary')}>
-              Back to the catalog
-            </Link>
-          }
-        >
-          It may have been mistyped, or the link may be from another catalog.
-        </EmptyState>
-      );
-    }
-    return <ErrorState message={part.error.message} onRetry={() => void part.refetch()} />;
-  }
+  return <PartQueryState query={part}>{(p) => <PartDetails part={p} justSaved={justSaved} />}</PartQueryState>;
+}
 
-  const p = part.data;
+function PartDetails({ part: p, justSaved }: { part: PartDto; justSaved: boolean }) {
   const family = FAMILIES[p.family];
   const cadmium = containsCadmium(p.parameters);
 
