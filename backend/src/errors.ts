@@ -4,6 +4,8 @@ export class DomainError extends Error {
     readonly status: number,
     readonly code: string,
     message: string,
+    /** Extra top-level fields of the error answer, beside `error` (e.g. the current record on a conflict). */
+    readonly extra?: Record<string, unknown>,
   ) {
     super(message);
     this.name = new.target.name;

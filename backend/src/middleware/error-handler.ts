@@ -1,7 +1,5 @@
 import type { NextFunction, Request, Response } from 'express';
 import { DomainError } from '../errors';
-import { ImportRejectedError } from '../modules/parts/parts-transfer.service';
-import { VersionConflictError } from '../modules/parts/parts.service';
 import { ValidationError } from './validate';
 
 export function notFoundApi(_req: Request, res: Response) {
@@ -13,14 +11,8 @@ export function errorHandler(err: unknown, req: Request, res: Response, _next: N
   if (err instanceof ValidationError) {
     return res.status(400).json({ error: { code: 'validation_failed', message: err.message, issues: err.issues } });
   }
-  if (err instanceof VersionConflictError) {
-    return res.status(409).json({ error: { code: err.code, message: err.message }, current: err.current });
-  }
-  if (err instanceof ImportRejectedError) {
-    return res.status(422).json({ error: { code: err.code, message: err.message }, report: err.report });
-  }
   if (err instanceof DomainError) {
-    return res.status(err.status).json({ error: { code: err.code, message: err.message } });
+    return res.status(err.status).json({ ...err.extra, error: { code: err.code, message: err.message } });
   }
   const status = (err as { status?: number; statusCode?: number }).status ?? (err as { statusCode?: number }).statusCode;
   if (status === 400 && (err as { type?: string }).type === 'entity.parse.failed') {

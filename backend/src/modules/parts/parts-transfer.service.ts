@@ -149,7 +149,7 @@ export function readImport(body: unknown, contentType: string | undefined): { ro
 
 export class ImportRejectedError extends DomainError {
   constructor(readonly report: ImportReport) {
-    super(422, 'import_rejected', `${report.errors.length} row(s) need fixing; nothing was imported.`);
+    super(422, 'import_rejected', `${report.errors.length} row(s) need fixing; nothing was imported.`, { report });
   }
 }
 

@@ -17,7 +17,7 @@ import { presentPart } from './parts.presenter';
 /** A stale edit: carries the part as it is now so the client can show what changed meanwhile. */
 export class VersionConflictError extends DomainError {
   constructor(readonly current: PartDto) {
-    super(409, 'version_conflict', 'Someone changed this part after you opened it. Review their changes, then save again.');
+    super(409, 'version_conflict', 'Someone changed this part after you opened it. Review their changes, then save again.', { current });
   }
 }
 
