@@ -10,3 +10,4 @@ export * from './permissions';
 export * from './units';
 export * from './families';
 export * from './parts';
+export * from './datasheets';

@@ -117,6 +117,8 @@ export const PartRevisionDtoSchema = z.object({
   version: z.number().int(),
   actor: z.object({ id: z.uuid(), name: z.string() }).nullable(),
   source: z.string(),
+  /** The datasheet whose reviewed values this revision applied, if any. */
+  datasheet: z.object({ id: z.uuid(), fileName: z.string() }).nullable().default(null),
   changes: z.array(RevisionChangeSchema),
   createdAt: z.iso.datetime(),
 });
