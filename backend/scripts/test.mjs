@@ -2,6 +2,7 @@
 // Plain Node with built-ins only, because it has to run before `npm ci` has (fresh CI clone).
 import crypto from 'node:crypto';
 import fs from 'node:fs';
+import os from 'node:os';
 import path from 'node:path';
 import { buildFrontend, childEnv, fakeSmtpEnv, migrate, seed, startFakeMail, startServer } from './lib/app.mjs';
 import { bootstrap } from './lib/bootstrap.mjs';
@@ -30,7 +31,8 @@ let current = null;
 
 // Settings from the developer's shell that would point tests at real services or fixed ports.
 const LEAKY = ['DATABASE_URL', 'PORT', 'APP_URL', 'SESSION_SECRET', 'SMTP_HOST', 'SMTP_PORT', 'SMTP_SECURE',
-  'SMTP_USER', 'SMTP_PASSWORD', 'FAKE_MAIL_API_URL', 'FRONTEND_DIST', 'E2E_BASE_URL'];
+  'SMTP_USER', 'SMTP_PASSWORD', 'FAKE_MAIL_API_URL', 'FRONTEND_DIST', 'E2E_BASE_URL', 'DATASHEET_DIR', 'DATASHEET_MAX_MB', 'DATASHEET_MAX_FILES',
+  'DATASHEET_MAX_PAGES', 'DATASHEET_WORKERS'];
 const testEnv = (extra = {}) =>
   childEnv({ ...Object.fromEntries(LEAKY.map((k) => [k, undefined])), NODE_ENV: 'test', ...extra });
 
@@ -122,6 +124,9 @@ await main(async () => {
     step('Dropping the throw-away databases…');
     for (const db of [testDb, e2eDb]) await dropDatabase(db).catch((err) => warn(`could not drop ${db}: ${err.message}`));
   }, { always: true }); // quick, and leaving junk databases behind helps nobody
+  // The end-to-end server's uploaded datasheets go to a throw-away folder too.
+  const e2eFiles = fs.mkdtempSync(path.join(os.tmpdir(), 'understudy-e2e-files-'));
+  onShutdown(() => fs.rmSync(e2eFiles, { recursive: true, force: true }), { always: true });
   await ensureDatabase(testDb);
   await ensureDatabase(e2eDb);
   const testUrl = databaseUrl(testDb);
@@ -145,7 +150,7 @@ await main(async () => {
       const baseUrl = `http://127.0.0.1:${port}`;
       await startServer({
         port,
-        env: testEnv({ DATABASE_URL: e2eUrl, APP_URL: baseUrl, ...fakeSmtpEnv(mail) }),
+        env: testEnv({ DATABASE_URL: e2eUrl, APP_URL: baseUrl, DATASHEET_DIR: e2eFiles, QUEUE_POLL_SECONDS: '0.5', ...fakeSmtpEnv(mail) }),
       });
       return await vitest(
         'frontend',

@@ -11,6 +11,7 @@ import type { Mailer } from './mail/mailer';
 import { loadCurrentUser } from './middleware/authenticate';
 import { errorHandler, notFoundApi } from './middleware/error-handler';
 import { rejectCrossSite } from './middleware/same-origin';
+import { datasheetsRouter } from './modules/datasheets/datasheets.router';
 import { auditEventsRouter } from './modules/audit-events/audit-events.router';
 import { authRouter } from './modules/auth/auth.router';
 import { SESSION_COOKIE } from './modules/auth/session';
@@ -22,11 +23,15 @@ import { outboxRouter } from './modules/outbox/outbox.router';
 import { partsRouter } from './modules/parts/parts.router';
 import { passwordResetsRouter } from './modules/password-resets/password-resets.router';
 import { usersRouter } from './modules/users/users.router';
+import type { JobQueue } from './queue/job-queue';
+import type { FileStorage } from './storage/file-storage';
 
 export interface AppDeps {
   config: AppConfig;
   db: DataSource;
   mailer: Mailer;
+  storage: FileStorage;
+  queue: JobQueue;
 }
 
 export interface BuiltApp {
@@ -35,7 +40,7 @@ export interface BuiltApp {
   close(): Promise<void>;
 }
 
-export function createApp({ config, db, mailer }: AppDeps): BuiltApp {
+export function createApp({ config, db, mailer, storage, queue }: AppDeps): BuiltApp {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
@@ -80,6 +85,7 @@ export function createApp({ config, db, mailer }: AppDeps): BuiltApp {
   app.use('/api/families', familiesRouter());
   app.use('/api/manufacturers', manufacturersRouter(db));
   app.use('/api/parts', partsRouter(db));
+  app.use('/api/datasheets', datasheetsRouter({ db, storage, queue, limits: config.datasheets }));
   app.use('/api', notFoundApi);
 
   if (config.frontendDist && fs.existsSync(path.join(config.frontendDist, 'index.html'))) {

@@ -1,4 +1,6 @@
+import path from 'node:path';
 import { z } from 'zod';
+import { DATASHEET_LIMITS } from '@understudy/shared-types';
 
 const EnvSchema = z.object({
   NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
@@ -19,6 +21,14 @@ const EnvSchema = z.object({
   FRONTEND_DIST: z.string().optional(),
   SIGN_IN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
   SIGN_IN_RATE_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
+  /** Folder of the local datasheet store; git-ignored under .data/ by default. */
+  DATASHEET_DIR: z.string().optional(),
+  DATASHEET_MAX_MB: z.coerce.number().positive().max(1024).default(DATASHEET_LIMITS.maxBytes / 1024 / 1024),
+  DATASHEET_MAX_FILES: z.coerce.number().int().min(1).max(100).default(DATASHEET_LIMITS.maxFilesPerUpload),
+  DATASHEET_MAX_PAGES: z.coerce.number().int().min(1).default(DATASHEET_LIMITS.maxPages),
+  /** Parsing jobs this process works on at once; 0 leaves parsing to other processes. */
+  DATASHEET_WORKERS: z.coerce.number().int().min(0).max(16).default(1),
+  QUEUE_POLL_SECONDS: z.coerce.number().min(0.5).max(60).default(1),
 });
 
 export interface AppConfig {
@@ -34,6 +44,7 @@ export interface AppConfig {
   fakeMailApiUrl?: string;
   frontendDist?: string;
   signInRateLimit: { limit: number; windowMs: number };
+  datasheets: { dir: string; maxBytes: number; maxFiles: number; maxPages: number; workers: number; pollSeconds: number };
 }
 
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
@@ -67,5 +78,13 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     fakeMailApiUrl: e.FAKE_MAIL_API_URL,
     frontendDist: e.FRONTEND_DIST,
     signInRateLimit: { limit: e.SIGN_IN_RATE_LIMIT, windowMs: e.SIGN_IN_RATE_WINDOW_MINUTES * 60_000 },
+    datasheets: {
+      dir: path.resolve(e.DATASHEET_DIR ?? path.join(import.meta.dirname, '../../.data/datasheets')),
+      maxBytes: Math.round(e.DATASHEET_MAX_MB * 1024 * 1024),
+      maxFiles: e.DATASHEET_MAX_FILES,
+      maxPages: e.DATASHEET_MAX_PAGES,
+      workers: e.DATASHEET_WORKERS,
+      pollSeconds: e.QUEUE_POLL_SECONDS,
+    },
   };
 }

@@ -10,6 +10,8 @@ export default async function setup() {
   const db = createDataSource(url);
   await db.initialize();
   await db.query('DROP SCHEMA IF EXISTS public CASCADE');
+  // The job queue keeps its own schema; a fresh run starts with no jobs left from the last.
+  await db.query('DROP SCHEMA IF EXISTS pgboss CASCADE');
   await db.query('CREATE SCHEMA public');
   await db.runMigrations({ transaction: 'each' });
   await db.destroy();

@@ -43,6 +43,13 @@ export const ROUTE_ACCESS: Record<string, Access> = {
   'DELETE /api/parts/:id': EDITORS,
   'POST /api/parts/:id/restore': EDITORS,
   'GET /api/parts/:id/revisions': 'signedIn',
+  'GET /api/datasheets': 'signedIn',
+  'POST /api/datasheets': EDITORS,
+  'GET /api/datasheets/:id': 'signedIn',
+  'GET /api/datasheets/:id/file': 'signedIn',
+  'PATCH /api/datasheets/:id/proposals/:proposalId': EDITORS,
+  'POST /api/datasheets/:id/apply': EDITORS,
+  'POST /api/datasheets/:id/retry': EDITORS,
 };
 
 const SAMPLE_ID = '00000000-0000-4000-8000-000000000000';

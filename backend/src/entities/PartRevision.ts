@@ -7,8 +7,10 @@ export interface PartRevision {
   /** The part's version after this change. */
   version: number;
   actorId: string | null;
-  /** 'created', 'edit', 'import', later 'datasheet:<id>'. */
+  /** 'created', 'edit', 'import', 'seed', 'datasheet'. */
   source: string;
+  /** The datasheet a 'datasheet' revision applied. */
+  datasheetId: string | null;
   changes: RevisionChange[];
   createdAt: Date;
 }
@@ -22,6 +24,7 @@ export const PartRevisionEntity = new EntitySchema<PartRevision>({
     version: { type: 'int' },
     actorId: { type: 'uuid', name: 'actor_id', nullable: true },
     source: { type: 'varchar', length: 80 },
+    datasheetId: { type: 'uuid', name: 'datasheet_id', nullable: true },
     changes: { type: 'jsonb' },
     createdAt: { type: 'timestamptz', name: 'created_at', createDate: true },
   },

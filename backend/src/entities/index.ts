@@ -1,4 +1,5 @@
 import { AuditEventEntity } from './AuditEvent';
+import { DatasheetEntity } from './Datasheet';
 import { InvitationEntity } from './Invitation';
 import { ManufacturerEntity } from './Manufacturer';
 import { PartEntity } from './Part';
@@ -7,6 +8,7 @@ import { PasswordResetEntity } from './PasswordReset';
 import { UserEntity } from './User';
 
 export * from './AuditEvent';
+export * from './Datasheet';
 export * from './Invitation';
 export * from './Manufacturer';
 export * from './Part';
@@ -14,4 +16,4 @@ export * from './PartRevision';
 export * from './PasswordReset';
 export * from './User';
 
-export const ENTITIES = [UserEntity, InvitationEntity, PasswordResetEntity, AuditEventEntity, ManufacturerEntity, PartEntity, PartRevisionEntity];
+export const ENTITIES = [UserEntity, InvitationEntity, PasswordResetEntity, AuditEventEntity, ManufacturerEntity, PartEntity, PartRevisionEntity, DatasheetEntity];

@@ -86,11 +86,15 @@ export function diffParts(before: Record<string, unknown>, after: Record<string,
   return changes.sort((x, y) => x.field.localeCompare(y.field));
 }
 
-async function writeRevision(db: Db, partId: string, version: number, actorId: string | null, source: string, changes: RevisionChange[]) {
-  await db.getRepository(PartRevisionEntity).insert({ partId, version, actorId, source, changes: changes as never });
+/** Why a revision was written: a plain source ('edit', 'import'…), or a datasheet whose reviewed values were applied. */
+export type RevisionOrigin = string | { source: 'datasheet'; datasheetId: string };
+
+async function writeRevision(db: Db, partId: string, version: number, actorId: string | null, origin: RevisionOrigin, changes: RevisionChange[]) {
+  const { source, datasheetId } = typeof origin === 'string' ? { source: origin, datasheetId: null } : origin;
+  await db.getRepository(PartRevisionEntity).insert({ partId, version, actorId, source, datasheetId, changes: changes as never });
 }
 
-export async function createPart(db: DataSource | EntityManager, actorId: string | null, input: PartCreateInput, source = 'created'): Promise<PartDto> {
+export async function createPart(db: DataSource | EntityManager, actorId: string | null, input: PartCreateInput, source: RevisionOrigin = 'created'): Promise<PartDto> {
   const run = async (tx: EntityManager) => {
     const manufacturer = await findOrCreateManufacturer(tx, input.manufacturer);
     const key = partNumberKey(input.partNumber);
@@ -129,7 +133,7 @@ export async function createPart(db: DataSource | EntityManager, actorId: string
  * Optimistic concurrency: the edit names the version it started from. The row is locked, the version compared,
  * and only then written, so two editors can never overwrite each other silently.
  */
-export async function updatePart(db: DataSource | EntityManager, actorId: string | null, id: string, body: PartUpdateBody, source = 'edit'): Promise<PartDto> {
+export async function updatePart(db: DataSource | EntityManager, actorId: string | null, id: string, body: PartUpdateBody, source: RevisionOrigin = 'edit'): Promise<PartDto> {
   const run = async (tx: EntityManager) => {
     const repo = tx.getRepository(PartEntity);
     const part = await repo.createQueryBuilder('p').setLock('pessimistic_write').where('p.id = :id', { id }).getOne();
@@ -195,10 +199,23 @@ export async function setArchived(db: DataSource, actorId: string, id: string, a
 
 export async function listRevisions(db: DataSource, partId: string): Promise<PartRevisionDto[]> {
   if (!(await db.getRepository(PartEntity).existsBy({ id: partId }))) throw new NotFoundError('No such part.');
-  const rows: { id: string; version: number; actor_id: string | null; actor_name: string | null; source: string; changes: RevisionChange[]; created_at: Date }[] =
+  const rows: {
+    id: string;
+    version: number;
+    actor_id: string | null;
+    actor_name: string | null;
+    source: string;
+    datasheet_id: string | null;
+    datasheet_file_name: string | null;
+    changes: RevisionChange[];
+    created_at: Date;
+  }[] =
     await db.query(
-      `SELECT r.id, r.version, r.actor_id, u.name AS actor_name, r.source, r.changes, r.created_at
-         FROM part_revisions r LEFT JOIN users u ON u.id = r.actor_id
+      `SELECT r.id, r.version, r.actor_id, u.name AS actor_name, r.source, r.changes, r.created_at,
+              r.datasheet_id, d.file_name AS datasheet_file_name
+         FROM part_revisions r
+         LEFT JOIN users u ON u.id = r.actor_id
+         LEFT JOIN datasheets d ON d.id = r.datasheet_id
         WHERE r.part_id = $1 ORDER BY r.version DESC, r.created_at DESC`,
       [partId],
     );
@@ -207,6 +224,7 @@ export async function listRevisions(db: DataSource, partId: string): Promise<Par
     version: r.version,
     actor: r.actor_id ? { id: r.actor_id, name: r.actor_name ?? 'Former account' } : null,
     source: r.source,
+    datasheet: r.datasheet_id ? { id: r.datasheet_id, fileName: r.datasheet_file_name ?? 'Datasheet' } : null,
     changes: r.changes,
     createdAt: new Date(r.created_at).toISOString(),
   }));
