@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { FamilyKeySchema, ParameterValueSchema } from './families';
+import { FamilyKeySchema, ParameterValueSchema, type ParameterValue } from './families';
 import { PartDtoSchema, PartRevisionDtoSchema } from './parts';
 
 /** Upload limits; the server reads its own size limit from the environment, this is the default. */
@@ -78,6 +78,19 @@ export const ParameterProposalSchema = z.object({
   editedValue: ParameterValueSchema.nullable().default(null),
 });
 export type ParameterProposal = z.infer<typeof ParameterProposalSchema>;
+
+/**
+ * The values an apply writes: accepted as read or edited as corrected, pending and rejected left out; for a
+ * parameter kept twice the later proposal wins. The server applies exactly this; the review screen previews it.
+ */
+export function reviewedParameters(proposals: readonly ParameterProposal[]): Record<string, ParameterValue> {
+  const out: Record<string, ParameterValue> = {};
+  for (const p of proposals) {
+    if (p.decision === 'accepted') out[p.key] = p.value;
+    else if (p.decision === 'edited' && p.editedValue) out[p.key] = p.editedValue;
+  }
+  return out;
+}
 
 /** The parser's whole answer for one document. */
 export const DatasheetExtractionSchema = z.object({

@@ -36,6 +36,14 @@ export const routes: RouteObject[] = [
           { path: 'parts/new', lazy: () => import('./routes/part-new').then((m) => ({ Component: m.PartNewRoute })) },
           { path: 'parts/:id', lazy: () => import('./routes/part-detail').then((m) => ({ Component: m.PartDetailRoute })) },
           { path: 'parts/:id/edit', lazy: () => import('./routes/part-edit').then((m) => ({ Component: m.PartEditRoute })) },
+          {
+            path: 'datasheets',
+            lazy: () => import('./routes/datasheets').then((m) => ({ Component: m.DatasheetsRoute })),
+          },
+          {
+            path: 'datasheets/:id',
+            lazy: () => import('./routes/datasheet-review').then((m) => ({ Component: m.DatasheetReviewRoute })),
+          },
           { path: 'compare', lazy: () => import('./routes/compare').then((m) => ({ Component: m.CompareRoute })) },
           {
             path: 'admin/people',

@@ -75,6 +75,7 @@ export function makeRevision(overrides: Partial<PartRevisionDto> = {}): PartRevi
     version: 3,
     actor: { id: USERS.editor.id, name: USERS.editor.name },
     source: 'ui',
+    datasheet: null,
     changes: [{ field: 'description', before: 'Old words.', after: 'Low-noise dual op amp for preamps.' }],
     createdAt: at,
     ...overrides,

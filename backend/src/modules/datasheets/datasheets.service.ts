@@ -4,13 +4,13 @@ import {
   getFamily,
   parameterValueSchemaFor,
   PartCreateBodySchema,
+  reviewedParameters,
   type DatasheetApplyBody,
   type DatasheetApplyResponse,
   type DatasheetDto,
   type DatasheetExtraction,
   type DatasheetListItem,
   type DatasheetListQuery,
-  type ParameterValue,
   type ProposalReviewBody,
   type UploadRejection,
 } from '@understudy/shared-types';
@@ -301,16 +301,6 @@ export async function reviewProposal(db: DataSource, id: string, proposalId: str
   });
 }
 
-/** The values a reviewer kept: accepted as proposed, or as they edited them. */
-export function reviewedParameters(extraction: DatasheetExtraction): Record<string, ParameterValue> {
-  const out: Record<string, ParameterValue> = {};
-  for (const p of extraction.proposals) {
-    if (p.decision === 'accepted') out[p.key] = p.value;
-    else if (p.decision === 'edited' && p.editedValue) out[p.key] = p.editedValue;
-  }
-  return out;
-}
-
 /**
  * Writes the reviewed values into the catalog through the parts service, so the optimistic-concurrency rule and
  * the revision history apply exactly as for a hand edit; the revision names this datasheet.
@@ -319,7 +309,7 @@ export async function applyDatasheet(db: DataSource, actorId: string, id: string
   const origin = { source: 'datasheet' as const, datasheetId: id };
   const partId = await db.transaction(async (tx) => {
     const sheet = await lockReviewable(tx, id);
-    const parameters = reviewedParameters(sheet.extraction);
+    const parameters = reviewedParameters(sheet.extraction.proposals);
     if (!Object.keys(parameters).length) {
       throw new DomainError(422, 'nothing_to_apply', 'Accept or edit at least one proposed value before applying.');
     }

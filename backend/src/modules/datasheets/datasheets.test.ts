@@ -6,6 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DatasheetDtoSchema, DatasheetListResponseSchema, PartRevisionListResponseSchema, type DatasheetDto } from '@understudy/shared-types';
 import { createTestContext, type TestContext } from '../../../test/context';
 import { renderOpAmp } from '../../../test/datasheet-fixtures';
+import { makePdf } from './extraction/test-support/make-pdf';
 import { runParseJob } from './datasheets.service';
 
 type Agent = ReturnType<typeof request.agent>;
@@ -85,7 +86,7 @@ describe('datasheet upload, parsing and download', () => {
 
     const file = await viewer.get(`/api/datasheets/${item.id}/file?download=1`).buffer(true).expect(200);
     expect(file.headers['content-type']).toBe('application/pdf');
-    expect(file.headers['content-disposition']).toMatch(new RegExp(`^attachment; filename="${pn}.pdf"`));
+    expect(file.headers['content-disposition']).toMatch(new RegExp(`^attachment; filename="?${pn}\\.pdf"?`));
     expect(Buffer.compare(file.body as Buffer, pdf)).toBe(0);
     const inline = await viewer.get(`/api/datasheets/${item.id}/file`).expect(200);
     expect(inline.headers['content-disposition']).toMatch(/^inline/);
@@ -127,6 +128,28 @@ describe('datasheet upload, parsing and download', () => {
     expect(none.body.error.message).toBeTruthy();
     const json = await editor.post('/api/datasheets').send({ files: [] }).expect(415);
     expect(json.body.error.code).toBe('multipart_required');
+    expect({ rows: await rowCount(), files: await filesInStorage() }).toEqual(before);
+  });
+
+  it('says which file is encrypted, looks scanned or has an absurd page count, and keeps none of them', async () => {
+    const before = { rows: await rowCount(), files: await filesInStorage() };
+    const text = [{ text: 'Slew rate 9 V/µs', x: 50, y: 50 }];
+    const encrypted = Buffer.from(await makePdf([{ texts: text }], { userPassword: 'secret' }));
+    const scanned = Buffer.from(await makePdf([{ rects: [{ x: 50, y: 50, width: 300, height: 12 }] }]));
+    const pages = ctx.config.datasheets.maxPages + 1;
+    const huge = Buffer.from(await makePdf(Array.from({ length: pages }, () => ({ texts: text }))));
+    const res = await upload(editor, [
+      { name: 'locked.pdf', data: encrypted },
+      { name: 'scan.pdf', data: scanned },
+      { name: 'huge.pdf', data: huge },
+    ]).expect(422);
+    expect(res.body.files.map((f: { fileName: string; code: string }) => [f.fileName, f.code])).toEqual([
+      ['locked.pdf', 'encrypted'],
+      ['scan.pdf', 'no-text'],
+      ['huge.pdf', 'too-many-pages'],
+    ]);
+    expect(res.body.files[1].message).toMatch(/scanned/);
+    expect(res.body.files[2].message).toContain(String(pages));
     expect({ rows: await rowCount(), files: await filesInStorage() }).toEqual(before);
   });
 

@@ -15,15 +15,15 @@ async function navLinks(role: Role) {
 
 describe('navigation by role', () => {
   it('shows a viewer Home and the Catalog', async () => {
-    expect(await navLinks('viewer')).toEqual(['Home', 'Catalog']);
+    expect(await navLinks('viewer')).toEqual(['Home', 'Catalog', 'Datasheets']);
   });
 
   it('shows an editor Home and the Catalog', async () => {
-    expect(await navLinks('editor')).toEqual(['Home', 'Catalog']);
+    expect(await navLinks('editor')).toEqual(['Home', 'Catalog', 'Datasheets']);
   });
 
   it('shows an admin People and Outbox as well', async () => {
-    expect(await navLinks('admin')).toEqual(['Home', 'Catalog', 'People', 'Outbox']);
+    expect(await navLinks('admin')).toEqual(['Home', 'Catalog', 'Datasheets', 'People', 'Outbox']);
   });
 
   it('sends a signed-out visitor to sign in, remembering the page', async () => {

@@ -1,5 +1,5 @@
 import { FAMILIES, PACKAGES, type PartDto } from '@understudy/shared-types';
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { Link, useLocation } from 'react-router';
 import {
   Alert,
@@ -78,15 +78,16 @@ function PackageCard({ part }: { part: PartDto }) {
   );
 }
 
-export function PartView({ id }: { id: string }) {
+/** `aside` is a slot for panels other features add to the side column (the app composes them, features stay apart). */
+export function PartView({ id, aside }: { id: string; aside?: (part: PartDto) => ReactNode }) {
   const part = usePart(id);
   const location = useLocation();
   const justSaved = !!(location.state && typeof location.state === 'object' && 'saved' in location.state);
 
-  return <PartQueryState query={part}>{(p) => <PartDetails part={p} justSaved={justSaved} />}</PartQueryState>;
+  return <PartQueryState query={part}>{(p) => <PartDetails part={p} justSaved={justSaved} aside={aside} />}</PartQueryState>;
 }
 
-function PartDetails({ part: p, justSaved }: { part: PartDto; justSaved: boolean }) {
+function PartDetails({ part: p, justSaved, aside }: { part: PartDto; justSaved: boolean; aside?: (part: PartDto) => ReactNode }) {
   const family = FAMILIES[p.family];
   const cadmium = containsCadmium(p.parameters);
 
@@ -163,6 +164,7 @@ function PartDetails({ part: p, justSaved }: { part: PartDto; justSaved: boolean
         </div>
         <div className="flex min-w-0 flex-col gap-6">
           <PackageCard part={p} />
+          {aside?.(p)}
           <Card aria-labelledby="history-title">
             <SectionHeading id="history-title" aside={<span className="text-xs text-ink-faint">version {p.version}</span>}>
               History

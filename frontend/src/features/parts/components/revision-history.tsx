@@ -1,4 +1,5 @@
 import type { FamilyDefinition } from '@understudy/shared-types';
+import { Link } from 'react-router';
 import { Badge, EmptyState, ErrorState, LoadingState } from '../../../components/ui';
 import { formatDateTime, formatRelative } from '../../../lib/format';
 import { usePartRevisions } from '../api/get-part-revisions';
@@ -27,9 +28,21 @@ export function RevisionHistory({ partId, family }: { partId: string; family: Fa
               <time dateTime={rev.createdAt} title={formatDateTime(rev.createdAt)} className="text-ink-soft">
                 {formatRelative(rev.createdAt)}
               </time>
-              <Badge>{sourceLabel(rev.source)}</Badge>
+              {/* The datasheet line below says where the change came from; the badge would repeat it. */}
+              {!rev.datasheet && <Badge>{sourceLabel(rev.source)}</Badge>}
               <span className="text-xs text-ink-faint">version {rev.version}</span>
             </p>
+            {rev.datasheet && (
+              <p className="text-sm text-ink-soft">
+                From datasheet{' '}
+                <Link
+                  to={`/datasheets/${rev.datasheet.id}`}
+                  className="font-semibold break-all text-copper-deep underline-offset-2 hover:underline"
+                >
+                  {rev.datasheet.fileName}
+                </Link>
+              </p>
+            )}
             {lines.length === 0 ? (
               <p className="text-sm text-ink-soft">{rev.version === 1 ? 'Added to the catalog.' : 'No field changes recorded.'}</p>
             ) : (

@@ -3,7 +3,7 @@ import { useEffect, useId, useMemo, useRef, useState, type KeyboardEvent } from 
 import { useNavigate } from 'react-router';
 import { LifecycleBadge, Spinner, cx } from '../../../components/ui';
 import { QUICK_FIND_MIN_CHARS, useFindParts } from '../api/find-parts';
-import { useDebouncedValue } from '../hooks/use-debounced-value';
+import { useDebouncedValue } from '../../../hooks/use-debounced-value';
 import { rankParts } from '../lib/rank';
 
 export const QUICK_FIND_DEBOUNCE_MS = 200;
