@@ -145,17 +145,21 @@ await main(async () => {
       await migrate(e2eUrl, { env: testEnv() });
       await seed(e2eUrl, { nodeEnv: 'test', env: testEnv() });
       await buildFrontend();
+      // The invented demo datasheets the browser test drops on the app.
+      const demoDatasheets = path.join(e2eFiles, 'demo-datasheets');
+      const [tsx, tsxArgs] = binCommand('tsx', [path.join('seed', 'src', 'datasheets', 'write-demo-datasheets.ts'), demoDatasheets], repoRoot);
+      await runOrFail('demo datasheets', tsx, tsxArgs, { cwd: repoRoot, env: testEnv() });
       const [smtpPort, apiPort, port] = await freePorts(3);
       const mail = await startFakeMail({ smtpPort, apiPort });
       const baseUrl = `http://127.0.0.1:${port}`;
       await startServer({
         port,
-        env: testEnv({ DATABASE_URL: e2eUrl, APP_URL: baseUrl, DATASHEET_DIR: e2eFiles, QUEUE_POLL_SECONDS: '0.5', ...fakeSmtpEnv(mail) }),
+        env: testEnv({ DATABASE_URL: e2eUrl, APP_URL: baseUrl, DATASHEET_DIR: path.join(e2eFiles, 'store'), QUEUE_POLL_SECONDS: '0.5', ...fakeSmtpEnv(mail) }),
       });
       return await vitest(
         'frontend',
         ['run', '--config', 'vitest.e2e.config.ts'],
-        testEnv({ E2E_BASE_URL: baseUrl, FAKE_MAIL_API_URL: mail.apiUrl, CHROMIUM_PATH: chromium }),
+        testEnv({ E2E_BASE_URL: baseUrl, FAKE_MAIL_API_URL: mail.apiUrl, CHROMIUM_PATH: chromium, E2E_DATASHEETS_DIR: demoDatasheets }),
       );
     } finally {
       if (!isShuttingDown()) await stopAll(); // the server and the mail server of this stage
