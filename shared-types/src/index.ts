@@ -11,3 +11,4 @@ export * from './units';
 export * from './families';
 export * from './parts';
 export * from './datasheets';
+export * from './alternates';

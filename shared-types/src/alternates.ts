@@ -1,0 +1,209 @@
+import { z } from 'zod';
+import { FamilyKeySchema, ParameterValueSchema } from './families';
+import { PartDtoSchema } from './parts';
+
+/**
+ * The substitution contract. Scoring itself lives in ./substitution (pure functions, shared so the page can
+ * re-rank at once when a weight moves); this file holds what travels over the wire.
+ */
+
+/** A criterion's weight: 0 ignores it, 5 makes it dominate. */
+export const WeightSchema = z.number().min(0).max(5);
+export const WeightsSchema = z.record(z.string(), WeightSchema);
+export type Weights = z.infer<typeof WeightsSchema>;
+
+/** One line of a candidate's explanation. `points` is what this criterion cost (≤ 0) out of the 100. */
+export const BreakdownLineSchema = z.object({
+  criterion: z.string(),
+  label: z.string(),
+  original: z.string().nullable(),
+  candidate: z.string().nullable(),
+  points: z.number(),
+  /** The most this criterion could cost with the weights in force. */
+  maxPoints: z.number(),
+  reason: z.string(),
+});
+export type BreakdownLine = z.infer<typeof BreakdownLineSchema>;
+
+export const PINOUT_CLASSES = ['drop-in', 'adapter', 'incompatible', 'unknown'] as const;
+export const PinoutClassSchema = z.enum(PINOUT_CLASSES);
+export type PinoutClass = z.infer<typeof PinoutClassSchema>;
+export const PINOUT_CLASS_LABELS: Record<PinoutClass, string> = {
+  'drop-in': 'Drop-in',
+  adapter: 'Same pins, other places',
+  incompatible: 'Not pin compatible',
+  unknown: 'Pinout unknown',
+};
+
+export const PinoutComparisonSchema = z.object({
+  class: PinoutClassSchema,
+  /** A package change (DIP-8 → SOIC-8) is reported apart from pin functions. */
+  packageChange: z.object({ from: z.string(), to: z.string() }).nullable(),
+  /** Pin numbers whose function differs between the two. */
+  differingPins: z.array(z.string()),
+  summary: z.string(),
+});
+export type PinoutComparison = z.infer<typeof PinoutComparisonSchema>;
+
+export const EQUIVALENT_STATUSES = ['approved', 'rejected'] as const;
+export const EquivalentStatusSchema = z.enum(EQUIVALENT_STATUSES);
+export type EquivalentStatus = z.infer<typeof EquivalentStatusSchema>;
+
+/** An editor's ruling on a pair, for a stated use ("fuzz gain stage", "any"); pairs are unordered. */
+export const EquivalentDtoSchema = z.object({
+  id: z.uuid(),
+  partId: z.uuid(),
+  equivalentId: z.uuid(),
+  status: EquivalentStatusSchema,
+  use: z.string(),
+  note: z.string(),
+  decidedBy: z.object({ id: z.uuid(), name: z.string() }).nullable(),
+  createdAt: z.iso.datetime(),
+  updatedAt: z.iso.datetime(),
+});
+export type EquivalentDto = z.infer<typeof EquivalentDtoSchema>;
+export const EquivalentBodySchema = z.object({
+  partId: z.uuid(),
+  equivalentId: z.uuid(),
+  status: EquivalentStatusSchema,
+  use: z.string().trim().min(1, 'Say what use this ruling is for').max(200),
+  note: z.string().trim().max(2000).default(''),
+});
+export type EquivalentBody = z.input<typeof EquivalentBodySchema>;
+export const EquivalentUpdateBodySchema = EquivalentBodySchema.pick({ status: true, use: true, note: true }).partial();
+
+/** The part fields a ranking needs, without history. */
+export const CandidatePartSchema = PartDtoSchema.pick({
+  id: true,
+  family: true,
+  manufacturer: true,
+  partNumber: true,
+  description: true,
+  lifecycle: true,
+  rohsStatus: true,
+  package: true,
+  pinLayout: true,
+  pinMap: true,
+  parameters: true,
+});
+export type CandidatePart = z.infer<typeof CandidatePartSchema>;
+
+export const RankedAlternateSchema = z.object({
+  part: CandidatePartSchema,
+  score: z.number().min(0).max(100),
+  breakdown: z.array(BreakdownLineSchema),
+  pinout: PinoutComparisonSchema,
+  /** The approved or rejected ruling on this pair, if an editor made one. */
+  equivalent: EquivalentDtoSchema.nullable(),
+});
+export type RankedAlternate = z.infer<typeof RankedAlternateSchema>;
+
+export const UnsuitableSchema = z.object({ part: CandidatePartSchema, reasons: z.array(z.string()).min(1) });
+export type Unsuitable = z.infer<typeof UnsuitableSchema>;
+
+const flag = z.enum(['0', '1', 'true', 'false']).transform((v) => v === '1' || v === 'true');
+
+/**
+ * `weights` travels as `criterion:weight` pairs ("slewRate:4,noise:0"); `supply` is the operating supply the
+ * candidate's range must cover ("9 V", "±15 V", "9..18 V"), defaulting to none (coverage is then only scored).
+ */
+export const AlternatesQuerySchema = z.object({
+  weights: z.string().max(500).optional(),
+  supply: z.string().max(40).optional(),
+  requireDropIn: flag.default(false),
+  allowObsolete: flag.default(false),
+  /** For a photoresistor: the LED it is lit by, to compare spectral peaks. */
+  pairedWith: z.uuid().optional(),
+  limit: z.coerce.number().int().min(1).max(200).default(25),
+});
+export type AlternatesQuery = z.input<typeof AlternatesQuerySchema>;
+
+export const AlternatesResponseSchema = z.object({
+  original: CandidatePartSchema,
+  weights: WeightsSchema,
+  /** Candidates of the family that passed the SQL filters and were scored. */
+  considered: z.number().int(),
+  items: z.array(RankedAlternateSchema),
+  unsuitable: z.array(UnsuitableSchema),
+});
+export type AlternatesResponse = z.infer<typeof AlternatesResponseSchema>;
+
+// ---------------------------------------------------------------------------------------------------------------
+// Ranking against a circuit's own requirements ("a position" in a design)
+
+const positive = z.number().positive();
+
+export const PositionRequirementsSchema = z.object({
+  family: FamilyKeySchema.exclude(['optocoupler']),
+  /** Total span between the rails; a single supply has its negative rail at ground. */
+  supply: z.object({ kind: z.enum(['single', 'dual']), volts: positive, halfSupplyBias: z.boolean().default(false) }).optional(),
+  /** The largest signal: the slew rate it needs follows as SR = 2π·f·Vpeak. */
+  signal: z.object({ peakVolts: positive, frequencyHz: positive }).optional(),
+  /** An LED driven from the output through a resistor: I = (Vout − Vf) / R. */
+  ledLoad: z.object({ outputVolts: positive, forwardVolts: positive, seriesOhms: positive }).optional(),
+  /** A photoresistor as the input resistor of an inverting stage: |gain| = Rf / R. */
+  invertingGain: z.object({ feedbackOhms: positive, gainMin: positive, gainMax: positive }).optional(),
+  requirePinLayout: z.string().max(48).optional(),
+  allowObsolete: z.boolean().default(false),
+});
+export type PositionRequirements = z.infer<typeof PositionRequirementsSchema>;
+export type PositionRequirementsInput = z.input<typeof PositionRequirementsSchema>;
+
+/** A quantity the requirements imply, with the formula it came from. */
+export const DerivedNeedSchema = z.object({
+  key: z.string(),
+  label: z.string(),
+  /** In SI base units; `range` for a resistance range. */
+  value: ParameterValueSchema,
+  unit: z.string(),
+  formula: z.string(),
+  explanation: z.string(),
+});
+export type DerivedNeed = z.infer<typeof DerivedNeedSchema>;
+
+/** How one part meets one need: the margin is actual/needed − 1 for "at least" needs (+0.5 = 50 % to spare). */
+export const MarginSchema = z.object({
+  need: z.string(),
+  label: z.string(),
+  needed: z.string(),
+  actual: z.string().nullable(),
+  margin: z.number().nullable(),
+  ok: z.boolean(),
+  reason: z.string(),
+});
+export type Margin = z.infer<typeof MarginSchema>;
+
+export const PositionMatchSchema = z.object({
+  part: CandidatePartSchema,
+  score: z.number().min(0).max(100),
+  margins: z.array(MarginSchema),
+  equivalentOf: z.array(z.uuid()).default([]),
+});
+export type PositionMatch = z.infer<typeof PositionMatchSchema>;
+
+export const PositionResultsSchema = z.object({
+  derived: z.array(DerivedNeedSchema),
+  considered: z.number().int(),
+  items: z.array(PositionMatchSchema),
+  unsuitable: z.array(UnsuitableSchema),
+});
+export type PositionResults = z.infer<typeof PositionResultsSchema>;
+
+/** A saved, named position of a design, so a team can rerun it when stock or the catalog changes. */
+export const RequirementSetBodySchema = z.object({
+  name: z.string().trim().min(1, 'Name this position').max(120),
+  design: z.string().trim().max(120).default(''),
+  requirements: PositionRequirementsSchema,
+});
+export type RequirementSetBody = z.input<typeof RequirementSetBodySchema>;
+export const RequirementSetUpdateBodySchema = RequirementSetBodySchema.partial();
+export const RequirementSetDtoSchema = z.object({
+  id: z.uuid(),
+  name: z.string(),
+  design: z.string(),
+  requirements: PositionRequirementsSchema,
+  owner: z.object({ id: z.uuid(), name: z.string() }),
+  createdAt: z.iso.datetime(),
+  updatedAt: z.iso.datetime(),
+});
+export type RequirementSetDto = z.infer<typeof RequirementSetDtoSchema>;
