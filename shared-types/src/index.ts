@@ -12,3 +12,4 @@ export * from './families';
 export * from './parts';
 export * from './datasheets';
 export * from './alternates';
+export * from './substitution';
