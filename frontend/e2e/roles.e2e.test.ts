@@ -14,9 +14,9 @@ afterAll(async () => {
 
 describe(`roles against ${BASE_URL}`, () => {
   it.each([
-    { role: 'viewer', email: 'viewer@understudy.test', nav: ['Home', 'Catalog', 'Datasheets'] },
-    { role: 'editor', email: 'editor@understudy.test', nav: ['Home', 'Catalog', 'Datasheets'] },
-    { role: 'admin', email: 'admin@understudy.test', nav: ['Home', 'Catalog', 'Datasheets', 'People', 'Outbox'] },
+    { role: 'viewer', email: 'viewer@understudy.test', nav: ['Home', 'Catalog', 'Positions', 'Datasheets'] },
+    { role: 'editor', email: 'editor@understudy.test', nav: ['Home', 'Catalog', 'Positions', 'Datasheets'] },
+    { role: 'admin', email: 'admin@understudy.test', nav: ['Home', 'Catalog', 'Positions', 'Datasheets', 'People', 'Outbox'] },
   ])('the $role signs in and sees only their navigation', async ({ role, email, nav }) => {
     const { context, page } = await newSession(browser);
     try {

@@ -37,6 +37,12 @@ export const routes: RouteObject[] = [
           { path: 'parts/:id', lazy: () => import('./routes/part-detail').then((m) => ({ Component: m.PartDetailRoute })) },
           { path: 'parts/:id/edit', lazy: () => import('./routes/part-edit').then((m) => ({ Component: m.PartEditRoute })) },
           {
+            path: 'parts/:id/alternates',
+            lazy: () => import('./routes/part-alternates').then((m) => ({ Component: m.PartAlternatesRoute })),
+          },
+          { path: 'positions', lazy: () => import('./routes/positions').then((m) => ({ Component: m.PositionsRoute })) },
+          { path: 'positions/:id', lazy: () => import('./routes/positions').then((m) => ({ Component: m.PositionsRoute })) },
+          {
             path: 'datasheets',
             lazy: () => import('./routes/datasheets').then((m) => ({ Component: m.DatasheetsRoute })),
           },

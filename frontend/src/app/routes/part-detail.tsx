@@ -1,4 +1,5 @@
 import { useParams } from 'react-router';
+import { AlternatesLink } from '../../features/alternates/components/alternates-link';
 import { PartDatasheets } from '../../features/datasheets/components/part-datasheets';
 import { PartView } from '../../features/parts/components/part-view';
 import { Can } from '../../lib/ability';
@@ -12,6 +13,7 @@ export function PartDetailRoute() {
       <PartView
         key={id}
         id={id}
+        actions={(part) => <AlternatesLink partId={part.id} partNumber={part.partNumber} family={part.family} />}
         aside={(part) => (
           <Can I="read" a="Datasheet">
             <PartDatasheets partId={part.id} allowUpload={!part.archived} />

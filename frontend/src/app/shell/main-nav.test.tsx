@@ -14,16 +14,16 @@ async function navLinks(role: Role) {
 }
 
 describe('navigation by role', () => {
-  it('shows a viewer Home and the Catalog', async () => {
-    expect(await navLinks('viewer')).toEqual(['Home', 'Catalog', 'Datasheets']);
+  it('shows a viewer Home, the Catalog and Positions', async () => {
+    expect(await navLinks('viewer')).toEqual(['Home', 'Catalog', 'Positions', 'Datasheets']);
   });
 
-  it('shows an editor Home and the Catalog', async () => {
-    expect(await navLinks('editor')).toEqual(['Home', 'Catalog', 'Datasheets']);
+  it('shows an editor Home, the Catalog and Positions', async () => {
+    expect(await navLinks('editor')).toEqual(['Home', 'Catalog', 'Positions', 'Datasheets']);
   });
 
   it('shows an admin People and Outbox as well', async () => {
-    expect(await navLinks('admin')).toEqual(['Home', 'Catalog', 'Datasheets', 'People', 'Outbox']);
+    expect(await navLinks('admin')).toEqual(['Home', 'Catalog', 'Positions', 'Datasheets', 'People', 'Outbox']);
   });
 
   it('sends a signed-out visitor to sign in, remembering the page', async () => {

@@ -14,6 +14,7 @@ interface NavItem {
 export const NAV_ITEMS: NavItem[] = [
   { to: '/', label: 'Home', end: true },
   { to: '/parts', label: 'Catalog', requires: { action: 'read', subject: 'Part' } },
+  { to: '/positions', label: 'Positions', requires: { action: 'read', subject: 'Requirement' } },
   { to: '/datasheets', label: 'Datasheets', requires: { action: 'read', subject: 'Datasheet' } },
   { to: '/admin/people', label: 'People', requires: { action: 'read', subject: 'User' } },
   { to: '/admin/outbox', label: 'Outbox', requires: { action: 'read', subject: 'Outbox' } },

@@ -51,4 +51,12 @@ describe('pinout diagram', () => {
     expect(placed.find((p) => p.pin === 4)?.kind).toBe('negative');
     expect(placed.find((p) => p.pin === 5)?.kind).toBe('positive');
   });
+
+  it('marks the pins it is asked to highlight and names them in the description', () => {
+    render(<PinoutDiagram pins={PIN_LAYOUTS['dip8-single-opamp'].pins} title="Single op amp pinout" highlightPins={['1', 5, '8']} />);
+    const svg = screen.getByRole('img', { name: 'Single op amp pinout' });
+    expect([...svg.querySelectorAll('[data-highlighted]')].map((g) => g.getAttribute('data-pin'))).toEqual(['1', '5', '8']);
+    expect(pin(svg, 2)).not.toHaveAttribute('data-highlighted');
+    expect(svg).toHaveAccessibleDescription(/Marked as different: pins 1, 5, 8\./);
+  });
 });

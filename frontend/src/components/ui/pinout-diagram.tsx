@@ -56,15 +56,20 @@ export function PinoutDiagram({
   pins,
   title,
   className,
+  highlightPins,
 }: {
   pins: Readonly<Record<number, string>>;
   /** What is drawn, e.g. "Pinout of UA-4558, DIP-8". */
   title: string;
   className?: string;
+  /** Pins to mark, e.g. those whose function differs from another part's; named in the description too. */
+  highlightPins?: ReadonlyArray<number | string>;
 }) {
   const titleId = useId();
   const descId = useId();
   const placed = placePins(pins);
+  const marked = new Set((highlightPins ?? []).map(Number).filter((n) => Number.isInteger(n)));
+  const markedPins = placed.filter((p) => marked.has(p.pin)).map((p) => p.pin);
   const rows = Math.max(1, ...placed.map((p) => p.row));
   const bodyX = LABEL_W + PIN_LEN;
   const bodyY = PAD_Y;
@@ -87,7 +92,9 @@ export function PinoutDiagram({
       <desc id={descId}>
         {placed.length === 0
           ? 'No pins recorded.'
-          : `Top view, pin 1 at the notch. ${placed.map((p) => `Pin ${p.pin}: ${p.label || 'unlabelled'}`).join('; ')}.`}
+          : `Top view, pin 1 at the notch. ${placed.map((p) => `Pin ${p.pin}: ${p.label || 'unlabelled'}`).join('; ')}.${
+              markedPins.length > 0 ? ` Marked as different: ${markedPins.length === 1 ? 'pin' : 'pins'} ${markedPins.join(', ')}.` : ''
+            }`}
       </desc>
       <rect x={bodyX} y={bodyY} width={BODY_W} height={bodyH} rx="6" className="fill-ink stroke-ink" />
       {/* Pin-1 notch, cut into the top edge. */}
@@ -98,9 +105,30 @@ export function PinoutDiagram({
         const left = p.side === 'left';
         const leadX = left ? bodyX - PIN_LEN : bodyX + BODY_W;
         const k = KIND_CLASSES[p.kind];
+        const highlighted = marked.has(p.pin);
         return (
-          <g key={p.pin} data-pin={p.pin} data-side={p.side} data-row={p.row} data-kind={p.kind} data-function={p.label}>
-            <title>{`Pin ${p.pin}: ${p.label || 'unlabelled'}`}</title>
+          <g
+            key={p.pin}
+            data-pin={p.pin}
+            data-side={p.side}
+            data-row={p.row}
+            data-kind={p.kind}
+            data-function={p.label}
+            data-highlighted={highlighted || undefined}
+          >
+            <title>{`Pin ${p.pin}: ${p.label || 'unlabelled'}${highlighted ? ' (differs)' : ''}`}</title>
+            {highlighted && (
+              <rect
+                x={left ? 2 : leadX}
+                y={y - PITCH / 2 + 2}
+                width={LABEL_W + PIN_LEN - 2}
+                height={PITCH - 4}
+                rx="4"
+                className="fill-warn-wash stroke-warn"
+                strokeWidth="1.5"
+                strokeDasharray="4 2"
+              />
+            )}
             <rect x={leadX} y={y - 4} width={PIN_LEN} height="8" rx="1.5" className={k.lead} />
             <text
               x={left ? bodyX + 10 : bodyX + BODY_W - 10}
@@ -123,16 +151,28 @@ export function PinoutDiagram({
           </g>
         );
       })}
-      {hasPower && (
+      {(hasPower || markedPins.length > 0) && (
         <g aria-hidden="true" transform={`translate(${bodyX - PIN_LEN} ${bodyY + bodyH + 14})`} className="text-[11px]">
-          <rect width="10" height="6" y="-3" className="fill-danger" />
-          <text x="14" dominantBaseline="central" className="fill-ink-soft">
-            V+ supply
-          </text>
-          <rect x="86" width="10" height="6" y="-3" className="fill-[#2f5d8a]" />
-          <text x="100" dominantBaseline="central" className="fill-ink-soft">
-            V− supply
-          </text>
+          {hasPower && (
+            <>
+              <rect width="10" height="6" y="-3" className="fill-danger" />
+              <text x="14" dominantBaseline="central" className="fill-ink-soft">
+                V+ supply
+              </text>
+              <rect x="86" width="10" height="6" y="-3" className="fill-[#2f5d8a]" />
+              <text x="100" dominantBaseline="central" className="fill-ink-soft">
+                V− supply
+              </text>
+            </>
+          )}
+          {markedPins.length > 0 && (
+            <g transform={`translate(${hasPower ? 172 : 0} 0)`}>
+              <rect width="10" height="8" y="-4" rx="2" className="fill-warn-wash stroke-warn" strokeDasharray="2 1" />
+              <text x="14" dominantBaseline="central" className="fill-ink-soft">
+                Differs
+              </text>
+            </g>
+          )}
         </g>
       )}
     </svg>

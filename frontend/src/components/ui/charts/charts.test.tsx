@@ -92,4 +92,24 @@ describe('supply range bars', () => {
     expect(within(table).getByRole('row', { name: /NW4580/ })).toHaveTextContent('4 V36 VYes');
     expect(within(table).getByRole('row', { name: /NW-LV/ })).toHaveTextContent('1.8 V5.5 VNo');
   });
+
+  it('draws a required span as a band and counts only the parts that cover all of it', () => {
+    render(
+      <SupplyRangeChart
+        title="Supply range against 9 V to 18 V"
+        series={[
+          { id: 'a', label: 'NW4580', min: 4, max: 36 },
+          { id: 'b', label: 'NW-MID', min: 5, max: 12 },
+        ]}
+        marker={undefined}
+        markerSpan={{ min: 9, max: 18 }}
+      />,
+    );
+    const chart = screen.getByRole('img', { name: 'Supply range against 9 V to 18 V' });
+    expect(chart.querySelector('[data-testid="supply-marker"] rect')).not.toBeNull();
+    expect(chart.querySelector('[data-testid="supply-marker"]')).toHaveTextContent('9 V to 18 V');
+    expect(chart).toHaveAccessibleDescription(/Marker at 9 V to 18 V; 1 of 2 run on it/);
+    const table = screen.getByRole('table', { name: 'Supply range per part' });
+    expect(within(table).getByRole('row', { name: /NW-MID/ })).toHaveTextContent('5 V12 VNo');
+  });
 });

@@ -20,13 +20,21 @@ const AXIS = 44;
 
 const volts = (v: number) => formatQuantity(v, 'V', { digits: 3 });
 
-export function coversMarker(s: SupplyRangeSeries, marker: number | undefined): boolean | undefined {
-  if (marker === undefined || s.min === undefined || s.max === undefined) return undefined;
-  return s.min <= marker && marker <= s.max;
+/** A required supply given as a span of its own ("9 V to 18 V"): a part must cover all of it. */
+export interface SupplySpan {
+  min: number;
+  max: number;
 }
 
-export function supplyRangeLayout(series: readonly SupplyRangeSeries[], marker: number | undefined) {
-  const highest = Math.max(marker ?? 0, ...series.map((s) => s.max ?? s.min ?? 0), 5);
+export function coversMarker(s: SupplyRangeSeries, marker: number | SupplySpan | undefined): boolean | undefined {
+  if (marker === undefined || s.min === undefined || s.max === undefined) return undefined;
+  const [low, high] = typeof marker === 'number' ? [marker, marker] : [marker.min, marker.max];
+  return s.min <= low && high <= s.max;
+}
+
+export function supplyRangeLayout(series: readonly SupplyRangeSeries[], marker: number | SupplySpan | undefined) {
+  const top = marker === undefined ? 0 : typeof marker === 'number' ? marker : marker.max;
+  const highest = Math.max(top, ...series.map((s) => s.max ?? s.min ?? 0), 5);
   const ticks = niceTicks(0, highest * 1.04, 6);
   const x = linearScale([0, ticks[ticks.length - 1]!], [LABEL_W, WIDTH - RIGHT]);
   const height = TOP + Math.max(1, series.length) * ROW + AXIS;
@@ -35,21 +43,30 @@ export function supplyRangeLayout(series: readonly SupplyRangeSeries[], marker: 
 
 /**
  * Horizontal bars, one per part, from its lowest to highest total supply span, with a marker line at the supply the
- * circuit has (a 9 V battery by default). Clicking the plot moves the marker.
+ * circuit has (a 9 V battery by default). Clicking the plot moves the marker. A `markerSpan` (a supply that varies,
+ * 9 V to 18 V) is drawn as a band instead, and a part runs on it only if it covers the whole band.
  */
 export function SupplyRangeChart({
   series,
   marker,
+  markerSpan,
   onMarkerChange,
   controls,
+  title = 'Supply range',
 }: {
   series: readonly SupplyRangeSeries[];
   marker: number | undefined;
+  markerSpan?: SupplySpan;
   onMarkerChange?: (volts: number) => void;
   controls?: ReactNode;
+  title?: string;
 }) {
-  const { x, ticks, height, plotBottom } = supplyRangeLayout(series, marker);
-  const covered = series.filter((s) => coversMarker(s, marker) === true);
+  const band = markerSpan && markerSpan.max > markerSpan.min ? markerSpan : undefined;
+  const required: number | SupplySpan | undefined = band ?? markerSpan?.max ?? marker;
+  const line = band ? undefined : typeof required === 'number' ? required : undefined;
+  const requiredText = band ? `${volts(band.min)} to ${volts(band.max)}` : line !== undefined ? volts(line) : '';
+  const { x, ticks, height, plotBottom } = supplyRangeLayout(series, required);
+  const covered = series.filter((s) => coversMarker(s, required) === true);
 
   function handleClick(event: MouseEvent<SVGRectElement>) {
     if (!onMarkerChange) return;
@@ -68,15 +85,15 @@ export function SupplyRangeChart({
           .map((s) =>
             s.min !== undefined && s.max !== undefined ? `${s.label}: ${volts(s.min)} to ${volts(s.max)}` : `${s.label}: not given`,
           )
-          .join('; ')}.${marker !== undefined ? ` Marker at ${volts(marker)}; ${covered.length} of ${series.length} run on it.` : ''}`;
+          .join('; ')}.${required !== undefined ? ` Marker at ${requiredText}; ${covered.length} of ${series.length} run on it.` : ''}`;
 
   return (
     <ChartFigure
       testId="supply-range-chart"
-      title="Supply range"
+      title={title}
       summary={
-        marker !== undefined
-          ? `Total span between the rails. ${covered.length} of ${series.length} run on ${volts(marker)}.`
+        required !== undefined
+          ? `Total span between the rails. ${covered.length} of ${series.length} run on ${requiredText}.`
           : 'Total span between the rails.'
       }
       description={description}
@@ -86,12 +103,12 @@ export function SupplyRangeChart({
       table={
         <ChartTable
           caption="Supply range per part"
-          head={['Part', 'Lowest supply', 'Highest supply', marker !== undefined ? `Runs on ${volts(marker)}` : 'Runs on marker']}
+          head={['Part', 'Lowest supply', 'Highest supply', required !== undefined ? `Runs on ${requiredText}` : 'Runs on marker']}
           rows={series.map((s) => [
             s.label,
             s.min !== undefined ? volts(s.min) : '—',
             s.max !== undefined ? volts(s.max) : '—',
-            coversMarker(s, marker) === undefined ? '—' : coversMarker(s, marker) ? 'Yes' : 'No',
+            coversMarker(s, required) === undefined ? '—' : coversMarker(s, required) ? 'Yes' : 'No',
           ])}
         />
       }
@@ -111,7 +128,7 @@ export function SupplyRangeChart({
       {series.map((s, i) => {
         const y = TOP + i * ROW + ROW / 2;
         const { colour } = seriesStyle(i);
-        const fits = coversMarker(s, marker);
+        const fits = coversMarker(s, required);
         return (
           <g key={s.id} data-testid="supply-bar" data-part={s.id}>
             <text x={LABEL_W - 10} y={y} textAnchor="end" dominantBaseline="central" className="fill-ink text-[13px] font-semibold">
@@ -150,19 +167,35 @@ export function SupplyRangeChart({
           onClick={handleClick}
         />
       )}
-      {marker !== undefined && (
+      {band && (
+        <g data-testid="supply-marker" pointerEvents="none">
+          <rect
+            x={px(x(band.min))}
+            y={TOP - 12}
+            width={Math.max(2, px(x(band.max) - x(band.min)))}
+            height={plotBottom - TOP + 12}
+            className="fill-ink/10 stroke-ink"
+            strokeWidth="1.5"
+            strokeDasharray="5 3"
+          />
+          <text x={px((x(band.min) + x(band.max)) / 2)} y={TOP - 16} textAnchor="middle" className="fill-ink text-[12px] font-bold">
+            {requiredText}
+          </text>
+        </g>
+      )}
+      {line !== undefined && (
         <g data-testid="supply-marker" pointerEvents="none">
           <line
-            x1={px(x(marker))}
-            x2={px(x(marker))}
+            x1={px(x(line))}
+            x2={px(x(line))}
             y1={TOP - 12}
             y2={plotBottom}
             className="stroke-ink"
             strokeWidth="2"
             strokeDasharray="5 3"
           />
-          <text x={px(x(marker))} y={TOP - 16} textAnchor="middle" className="fill-ink text-[12px] font-bold">
-            {volts(marker)}
+          <text x={px(x(line))} y={TOP - 16} textAnchor="middle" className="fill-ink text-[12px] font-bold">
+            {volts(line)}
           </text>
         </g>
       )}

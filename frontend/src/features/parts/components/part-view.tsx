@@ -78,16 +78,39 @@ function PackageCard({ part }: { part: PartDto }) {
   );
 }
 
-/** `aside` is a slot for panels other features add to the side column (the app composes them, features stay apart). */
-export function PartView({ id, aside }: { id: string; aside?: (part: PartDto) => ReactNode }) {
+/**
+ * `aside` is a slot for panels other features add to the side column, `actions` one for buttons beside Edit (the
+ * app composes them, features stay apart).
+ */
+export function PartView({
+  id,
+  aside,
+  actions,
+}: {
+  id: string;
+  aside?: (part: PartDto) => ReactNode;
+  actions?: (part: PartDto) => ReactNode;
+}) {
   const part = usePart(id);
   const location = useLocation();
   const justSaved = !!(location.state && typeof location.state === 'object' && 'saved' in location.state);
 
-  return <PartQueryState query={part}>{(p) => <PartDetails part={p} justSaved={justSaved} aside={aside} />}</PartQueryState>;
+  return (
+    <PartQueryState query={part}>{(p) => <PartDetails part={p} justSaved={justSaved} aside={aside} actions={actions} />}</PartQueryState>
+  );
 }
 
-function PartDetails({ part: p, justSaved, aside }: { part: PartDto; justSaved: boolean; aside?: (part: PartDto) => ReactNode }) {
+function PartDetails({
+  part: p,
+  justSaved,
+  aside,
+  actions,
+}: {
+  part: PartDto;
+  justSaved: boolean;
+  aside?: (part: PartDto) => ReactNode;
+  actions?: (part: PartDto) => ReactNode;
+}) {
   const family = FAMILIES[p.family];
   const cadmium = containsCadmium(p.parameters);
 
@@ -112,18 +135,21 @@ function PartDetails({ part: p, justSaved, aside }: { part: PartDto; justSaved: 
             {p.rohsNote && <span className="text-sm text-ink-soft">{p.rohsNote}</span>}
           </div>
         </div>
-        {!p.archived && (
-          <div className="flex items-center gap-2">
-            <Can I="update" a="Part">
-              <Link to={`/parts/${p.id}/edit`} className={buttonClasses('primary', 'sm')}>
-                Edit
-              </Link>
-            </Can>
-            <Can I="archive" a="Part">
-              <ArchiveButton part={p} />
-            </Can>
-          </div>
-        )}
+        <div className="flex flex-wrap items-center gap-2">
+          {actions?.(p)}
+          {!p.archived && (
+            <>
+              <Can I="update" a="Part">
+                <Link to={`/parts/${p.id}/edit`} className={buttonClasses('primary', 'sm')}>
+                  Edit
+                </Link>
+              </Can>
+              <Can I="archive" a="Part">
+                <ArchiveButton part={p} />
+              </Can>
+            </>
+          )}
+        </div>
       </header>
 
       {p.archived && (
