@@ -1,6 +1,5 @@
-import type { FamilyKey, ParameterValue } from '@understudy/shared-types';
+import { parseQuantity, type FamilyKey, type ParameterValue } from '@understudy/shared-types';
 import { boxesOf, type Line } from '../layout';
-import { parseQuantity } from '@understudy/shared-types';
 import { clampConfidence, type Candidate } from './candidate';
 import { readCellMaterial, readColour, readInputStage, readLedPackage, readLens, readMounting, readShaft, readTaper } from './enums';
 import { definitionOf } from './values';

@@ -26,6 +26,8 @@ describe('candidatesFromProse', () => {
   it('leaves test conditions and numbers without units alone', () => {
     expect(valueOf('The input offset voltage (VCM = 0 V) is 0.5 mV typical.', 'inputOffsetVoltage')).toEqual({ typ: 0.0005 });
     expect(valueOf('The slew rate improved in 2019 by 30 percent.', 'slewRate')).toBeUndefined();
+    expect(valueOf('Dual-gang control, issue 2025-10-28.', 'gangs', 'potentiometer')).toBeUndefined();
+    expect(valueOf('Number of gangs: 2', 'gangs', 'potentiometer')).toEqual({ typ: 2 });
   });
 
   it('reads ranges, "between … and …" and supplies as spans', () => {

@@ -282,8 +282,6 @@ function assignQuantities(sentence: string, names: NameHit[], defs: Definition[]
     for (let i = names.length - 1; i >= 0 && target < 0; i--) {
       const n = names[i]!;
       if (n.end > q.start || q.start - n.end > 110) continue;
-      // A bare count or ratio ("Gangs: 2", "gamma 0.7") must follow its name closely, with no other number between.
-      if ((defs[i]!.unit ?? '') === '' && (q.start - n.end > 25 || /\d/.test(sentence.slice(n.end, q.start)))) continue;
       reading = readFor(defs[i]!, n.key, q.raw);
       if (reading) target = i;
     }
