@@ -14,6 +14,7 @@ installSignalHandlers();
 // `database: false` benches (the datasheet parser) need no cluster at all.
 const BENCHES = {
   search: { file: 'search.bench.ts', database: true },
+  alternates: { file: 'alternates.bench.ts', database: true },
   extract: { file: 'extract.bench.ts', database: false },
 };
 

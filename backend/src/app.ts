@@ -11,10 +11,12 @@ import type { Mailer } from './mail/mailer';
 import { loadCurrentUser } from './middleware/authenticate';
 import { errorHandler, notFoundApi } from './middleware/error-handler';
 import { rejectCrossSite } from './middleware/same-origin';
+import { alternatesRouter } from './modules/alternates/alternates.router';
 import { datasheetsRouter } from './modules/datasheets/datasheets.router';
 import { auditEventsRouter } from './modules/audit-events/audit-events.router';
 import { authRouter } from './modules/auth/auth.router';
 import { SESSION_COOKIE } from './modules/auth/session';
+import { equivalentsRouter } from './modules/equivalents/equivalents.router';
 import { familiesRouter } from './modules/families/families.router';
 import { healthRouter } from './modules/health/health.router';
 import { invitationsRouter } from './modules/invitations/invitations.router';
@@ -22,6 +24,7 @@ import { manufacturersRouter } from './modules/manufacturers/manufacturers.route
 import { outboxRouter } from './modules/outbox/outbox.router';
 import { partsRouter } from './modules/parts/parts.router';
 import { passwordResetsRouter } from './modules/password-resets/password-resets.router';
+import { requirementSetsRouter } from './modules/requirement-sets/requirement-sets.router';
 import { usersRouter } from './modules/users/users.router';
 import type { JobQueue } from './queue/job-queue';
 import type { FileStorage } from './storage/file-storage';
@@ -84,8 +87,11 @@ export function createApp({ config, db, mailer, storage, queue }: AppDeps): Buil
   app.use('/api/outbox', outboxRouter(config));
   app.use('/api/families', familiesRouter());
   app.use('/api/manufacturers', manufacturersRouter(db));
+  app.use('/api', alternatesRouter(db));
+  app.use('/api', equivalentsRouter(db));
   app.use('/api/parts', partsRouter(db));
   app.use('/api/datasheets', datasheetsRouter({ db, storage, queue, limits: config.datasheets }));
+  app.use('/api/requirement-sets', requirementSetsRouter(db));
   app.use('/api', notFoundApi);
 
   if (config.frontendDist && fs.existsSync(path.join(config.frontendDist, 'index.html'))) {

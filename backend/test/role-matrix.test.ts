@@ -50,6 +50,18 @@ export const ROUTE_ACCESS: Record<string, Access> = {
   'PATCH /api/datasheets/:id/proposals/:proposalId': EDITORS,
   'POST /api/datasheets/:id/apply': EDITORS,
   'POST /api/datasheets/:id/retry': EDITORS,
+  'GET /api/parts/:id/alternates': 'signedIn',
+  'POST /api/alternates/rank': 'signedIn',
+  'GET /api/parts/:id/equivalents': 'signedIn',
+  'POST /api/equivalents': EDITORS,
+  'PATCH /api/equivalents/:id': EDITORS,
+  'DELETE /api/equivalents/:id': EDITORS,
+  'GET /api/requirement-sets': 'signedIn',
+  'POST /api/requirement-sets': 'signedIn',
+  'GET /api/requirement-sets/:id': 'signedIn',
+  'PATCH /api/requirement-sets/:id': 'signedIn',
+  'DELETE /api/requirement-sets/:id': 'signedIn',
+  'GET /api/requirement-sets/:id/results': 'signedIn',
 };
 
 const SAMPLE_ID = '00000000-0000-4000-8000-000000000000';
