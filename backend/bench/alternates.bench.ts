@@ -5,14 +5,11 @@
  * difference is the engine's scoring, JSON and HTTP.
  * Target: API p95 ≤ 150 ms.
  */
-import { spawn } from 'node:child_process';
-import net, { type AddressInfo } from 'node:net';
-import path from 'node:path';
 import { AlternatesQuerySchema, PositionRequirementsSchema, type FamilyKey, type PositionRequirementsInput } from '@understudy/shared-types';
 import { loadConfig } from '../src/config';
 import { createDataSource } from '../src/data-source';
 import { alternatesSqlOnly, positionSqlOnly } from '../src/modules/alternates/alternates.service';
-import { createUser, TEST_PASSWORD } from '../test/factories';
+import { startApiAsViewer, timeRuns } from './api-harness';
 import { loadSyntheticCatalog } from './load-synthetic';
 
 const N = Number(process.env.BENCH_PARTS ?? 100_000);
@@ -71,46 +68,11 @@ const POSITION: PositionRequirementsInput = {
   ledLoad: { outputVolts: 7, forwardVolts: 2, seriesOhms: 470 },
 };
 
-const user = await createUser(db, { role: 'viewer', email: `bench-${Date.now()}@example.test` });
-// The API runs as its own process, as in production, so the client's work here is not counted against it.
-const port = await new Promise<number>((resolve) => {
-  const probe = net.createServer().listen(0, '127.0.0.1', () => {
-    const { port: free } = probe.address() as AddressInfo;
-    probe.close(() => resolve(free));
-  });
-});
-const backendDir = path.resolve(import.meta.dirname, '..');
-const server = spawn(path.join(backendDir, '../node_modules/.bin/tsx'), ['src/index.ts'], {
-  cwd: backendDir,
-  env: { ...process.env, NODE_ENV: 'test', PORT: String(port), HOST: '127.0.0.1', SESSION_SECRET: 'bench-session-secret-0123456789', SIGN_IN_RATE_LIMIT: '1000' },
-  stdio: ['ignore', 'ignore', 'inherit'],
-});
-const base = `http://127.0.0.1:${port}`;
-for (let i = 0; ; i++) {
-  const ok = await fetch(`${base}/api/health`).then((r) => r.ok, () => false);
-  if (ok) break;
-  if (i > 150) throw new Error('The API did not start within 30 s');
-  await new Promise((r) => setTimeout(r, 200));
-}
-const signIn = await fetch(`${base}/api/auth/sign-in`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: user.email, password: TEST_PASSWORD }) });
-const cookie = signIn.headers.get('set-cookie')!.split(';')[0]!;
+const server = await startApiAsViewer(db);
+const { base, cookie } = server;
 
-function percentile(sorted: number[], p: number): number {
-  const i = Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1));
-  return sorted[i]!;
-}
 
-async function time(fn: () => Promise<unknown>): Promise<{ p50: number; p95: number }> {
-  for (let i = 0; i < 5; i++) await fn();
-  const samples: number[] = [];
-  for (let i = 0; i < ITERATIONS; i++) {
-    const t0 = performance.now();
-    await fn();
-    samples.push(performance.now() - t0);
-  }
-  samples.sort((a, b) => a - b);
-  return { p50: percentile(samples, 50), p95: percentile(samples, 95) };
-}
+const time = (fn: () => Promise<unknown>) => timeRuns(fn, ITERATIONS);
 
 async function fetchJson(url: string, init: RequestInit = {}): Promise<Record<string, unknown>> {
   const res = await fetch(url, { ...init, headers: { cookie, 'content-type': 'application/json', ...init.headers } });
@@ -158,6 +120,6 @@ log(widths.map((w) => '-'.repeat(w)).join('  '));
 for (const r of rows) log(line(r));
 log(`\nWorst API p95: ${worstP95.toFixed(1)} ms (target ≤ ${TARGET_P95} ms) ${worstP95 <= TARGET_P95 ? 'met' : 'NOT met'}`);
 
-server.kill('SIGTERM');
-await db.query(`DELETE FROM users WHERE id = $1`, [user.id]);
+server.stop();
+await server.removeViewer();
 await db.destroy();

@@ -3,15 +3,12 @@
  * keep-alive) and as the bare SQL the API runs, with p50, p95 and the API/SQL ratio.
  * Targets on a 2-core machine: API p95 ≤ 50 ms, ratio ≤ 2.
  */
-import { spawn } from 'node:child_process';
-import net, { type AddressInfo } from 'node:net';
-import path from 'node:path';
 import { PartListQuerySchema } from '@understudy/shared-types';
 import { loadConfig } from '../src/config';
 import { createDataSource } from '../src/data-source';
 import { parseFilters } from '../src/modules/parts/part-filters';
 import { buildSearchSql, matchingManufacturers } from '../src/modules/parts/parts-search.service';
-import { createUser, TEST_PASSWORD } from '../test/factories';
+import { startApiAsViewer, timeRuns } from './api-harness';
 import { loadSyntheticCatalog } from './load-synthetic';
 
 const N = Number(process.env.BENCH_PARTS ?? 100_000);
@@ -44,46 +41,11 @@ const QUERIES: { name: string; query: Record<string, string> }[] = [
   { name: 'deep page (page 400 of op amps)', query: { family: 'op-amp', page: '400', pageSize: '50' } },
 ];
 
-const user = await createUser(db, { role: 'viewer', email: `bench-${Date.now()}@example.test` });
-// The API runs as its own process, as in production, so the client's work here is not counted against it.
-const port = await new Promise<number>((resolve) => {
-  const probe = net.createServer().listen(0, '127.0.0.1', () => {
-    const { port: free } = probe.address() as AddressInfo;
-    probe.close(() => resolve(free));
-  });
-});
-const backendDir = path.resolve(import.meta.dirname, '..');
-const server = spawn(path.join(backendDir, '../node_modules/.bin/tsx'), ['src/index.ts'], {
-  cwd: backendDir,
-  env: { ...process.env, NODE_ENV: 'test', PORT: String(port), HOST: '127.0.0.1', SESSION_SECRET: 'bench-session-secret-0123456789', SIGN_IN_RATE_LIMIT: '1000' },
-  stdio: ['ignore', 'ignore', 'inherit'],
-});
-const base = `http://127.0.0.1:${port}`;
-for (let i = 0; ; i++) {
-  const ok = await fetch(`${base}/api/health`).then((r) => r.ok, () => false);
-  if (ok) break;
-  if (i > 150) throw new Error('The API did not start within 30 s');
-  await new Promise((r) => setTimeout(r, 200));
-}
-const signIn = await fetch(`${base}/api/auth/sign-in`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: user.email, password: TEST_PASSWORD }) });
-const cookie = signIn.headers.get('set-cookie')!.split(';')[0]!;
+const server = await startApiAsViewer(db);
+const { base, cookie } = server;
 
-function percentile(sorted: number[], p: number): number {
-  const i = Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1));
-  return sorted[i]!;
-}
 
-async function time(fn: () => Promise<unknown>): Promise<{ p50: number; p95: number }> {
-  for (let i = 0; i < 5; i++) await fn();
-  const samples: number[] = [];
-  for (let i = 0; i < ITERATIONS; i++) {
-    const t0 = performance.now();
-    await fn();
-    samples.push(performance.now() - t0);
-  }
-  samples.sort((a, b) => a - b);
-  return { p50: percentile(samples, 50), p95: percentile(samples, 95) };
-}
+const time = (fn: () => Promise<unknown>) => timeRuns(fn, ITERATIONS);
 
 log(`\n${ITERATIONS} timed runs per query after 5 warm-up runs; milliseconds.\n`);
 const header = ['query', 'hits', 'API p50', 'API p95', 'SQL p50', 'SQL p95', 'ratio p50'];
@@ -117,6 +79,6 @@ for (const r of rows) log(line(r));
 log(`\nWorst API p95: ${worstP95.toFixed(1)} ms (target ≤ 50 ms) ${worstP95 <= 50 ? 'met' : 'NOT met'}`);
 log(`Worst API/SQL ratio at p50: ${worstRatio.toFixed(2)} (target ≤ 2) ${worstRatio <= 2 ? 'met' : 'NOT met'}`);
 
-server.kill('SIGTERM');
-await db.query(`DELETE FROM users WHERE id = $1`, [user.id]);
+server.stop();
+await server.removeViewer();
 await db.destroy();

@@ -90,7 +90,7 @@ describe(`roles against ${BASE_URL}`, () => {
       await invitePage.getByRole('heading', { level: 1, name: 'Hello, Ingrid Invitee' }).waitFor();
       expect(new URL(invitePage.url()).pathname).toBe('/');
       expect(await invitePage.getByRole('main').getByText('Editor', { exact: true }).first().isVisible()).toBe(true);
-      expect(await mainNavLinks(invitePage)).toEqual(['Home', 'Catalog', 'Datasheets']);
+      expect(await mainNavLinks(invitePage)).toEqual(['Home', 'Catalog', 'Positions', 'Datasheets']);
       await screenshot(invitePage, 'invitee-home');
     } finally {
       await admin.context.close();
