@@ -70,7 +70,12 @@ export const EquivalentBodySchema = z.object({
   note: z.string().trim().max(2000).default(''),
 });
 export type EquivalentBody = z.input<typeof EquivalentBodySchema>;
-export const EquivalentUpdateBodySchema = EquivalentBodySchema.pick({ status: true, use: true, note: true }).partial();
+/** Only what changes; no defaults, so an omitted note is kept rather than cleared. */
+export const EquivalentUpdateBodySchema = z.object({
+  status: EquivalentStatusSchema.optional(),
+  use: z.string().trim().min(1, 'Say what use this ruling is for').max(200).optional(),
+  note: z.string().trim().max(2000).optional(),
+});
 
 /** The part fields a ranking needs, without history. */
 export const CandidatePartSchema = PartDtoSchema.pick({
@@ -196,7 +201,12 @@ export const RequirementSetBodySchema = z.object({
   requirements: PositionRequirementsSchema,
 });
 export type RequirementSetBody = z.input<typeof RequirementSetBodySchema>;
-export const RequirementSetUpdateBodySchema = RequirementSetBodySchema.partial();
+/** Only what changes; no defaults, so an omitted design is kept rather than cleared. */
+export const RequirementSetUpdateBodySchema = z.object({
+  name: z.string().trim().min(1, 'Name this position').max(120).optional(),
+  design: z.string().trim().max(120).optional(),
+  requirements: PositionRequirementsSchema.optional(),
+});
 export const RequirementSetDtoSchema = z.object({
   id: z.uuid(),
   name: z.string(),

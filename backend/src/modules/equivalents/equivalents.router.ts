@@ -3,7 +3,6 @@ import type { DataSource } from 'typeorm';
 import { EquivalentBodySchema, EquivalentUpdateBodySchema, IdParamsSchema } from '@understudy/shared-types';
 import { authorize } from '../../middleware/authenticate';
 import { validate } from '../../middleware/validate';
-import { onlySent } from './only-sent';
 import { createEquivalent, deleteEquivalent, listEquivalents, updateEquivalent } from './equivalents.service';
 
 /** Mounted at /api: a part's rulings live under the part, the rulings themselves under /equivalents. */
@@ -30,7 +29,7 @@ export function equivalentsRouter(db: DataSource): Router {
     '/equivalents/:id',
     authorize('update', 'Equivalent'),
     ...validate({ params: IdParamsSchema, body: EquivalentUpdateBodySchema }, async ({ params, body }, req, res) => {
-      res.json(await updateEquivalent(db, req.user!.id, params.id, onlySent(body, req.body)));
+      res.json(await updateEquivalent(db, req.user!.id, params.id, body));
     }),
   );
 

@@ -4,7 +4,6 @@ import { IdParamsSchema, RequirementSetBodySchema, RequirementSetUpdateBodySchem
 import { authorize } from '../../middleware/authenticate';
 import { validate } from '../../middleware/validate';
 import { rankPosition } from '../alternates/alternates.service';
-import { onlySent } from '../equivalents/only-sent';
 import {
   createRequirementSet,
   deleteRequirementSet,
@@ -49,7 +48,7 @@ export function requirementSetsRouter(db: DataSource): Router {
     '/:id',
     authorize('update', 'Requirement'),
     ...validate({ params: IdParamsSchema, body: RequirementSetUpdateBodySchema }, async ({ params, body }, req, res) => {
-      res.json(await updateRequirementSet(db, req.ability, params.id, onlySent(body, req.body)));
+      res.json(await updateRequirementSet(db, req.ability, params.id, body));
     }),
   );
 
