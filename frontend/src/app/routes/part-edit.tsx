@@ -3,7 +3,7 @@ import { useNavigate, useParams } from 'react-router';
 import { PageHeader } from '../../components/ui';
 import { usePart } from '../../features/parts/api/get-part';
 import { PartForm } from '../../features/parts/components/part-form';
-import { PartQueryState } from '../../features/parts/components/part-query-state';
+import { PartQueryState } from '../../components/ui/part-query-state';
 import { RequireAbility } from './require-ability';
 
 function EditPart({ id }: { id: string }) {

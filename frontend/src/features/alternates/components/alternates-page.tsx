@@ -23,8 +23,8 @@ import {
   cx,
 } from '../../../components/ui';
 import { SupplyRangeChart, type SupplyRangeSeries } from '../../../components/ui/charts';
+import { PartQueryState } from '../../../components/ui/part-query-state';
 import { useDebouncedValue } from '../../../hooks/use-debounced-value';
-import { isApiClientError } from '../../../lib/api-client';
 import { containsCadmium, packageLabel, pinLayoutFor } from '../../../lib/part-display';
 import { alternatesApiQuery, useAlternates } from '../api/get-alternates';
 import { rulingFor, useEquivalents } from '../api/get-equivalents';
@@ -180,24 +180,8 @@ export function AlternatesPage({ partId }: { partId: string }) {
   });
   const rulings = useEquivalents(partId);
 
-  if (part.isPending) return <LoadingState label="Loading part…" />;
-  if (part.isError) {
-    if (isApiClientError(part.error) && part.error.status === 404) {
-      return (
-        <EmptyState
-          title="There is no such part"
-          action={
-            <Link to="/parts" className={buttonClasses('secondary')}>
-              Back to the catalog
-            </Link>
-          }
-        >
-          It may have been mistyped, or the link may be from another catalog.
-        </EmptyState>
-      );
-    }
-    return <ErrorState message={part.error.message} onRetry={() => void part.refetch()} />;
-  }
+  // The shared loading / no-such-part / error states; the page itself needs the part's data below.
+  if (!part.isSuccess) return <PartQueryState query={part}>{() => null}</PartQueryState>;
 
   const original = part.data;
   const data = alternates.data;

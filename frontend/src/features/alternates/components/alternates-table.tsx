@@ -1,8 +1,7 @@
 import { createColumnHelper, type ColumnDef, type Table } from '@tanstack/react-table';
 import { MAX_COMPARE, type CandidatePart, type RankedAlternate } from '@understudy/shared-types';
-import { Link } from 'react-router';
-import { CadmiumMark, LifecycleBadge } from '../../../components/ui';
-import { containsCadmium, packageLabel } from '../../../lib/part-display';
+import { PartCell } from './part-cell';
+import { LifecycleBadge } from '../../../components/ui';
 import { AlternateDetails } from './alternate-details';
 import { ExpandableTable, type ColumnMeta } from './expandable-table';
 import { PinoutClassBadge } from './pinout-class-badge';
@@ -51,21 +50,7 @@ const COLUMNS: ColumnDef<RankedAlternate, any>[] = [
   column.display({
     id: 'part',
     header: 'Part · manufacturer',
-    cell: ({ row }) => {
-      const part = row.original.part;
-      return (
-        <span className="flex flex-col">
-          <span className="inline-flex items-center gap-1.5 whitespace-nowrap">
-            <Link to={`/parts/${part.id}`} className="font-semibold text-ink underline-offset-2 hover:text-copper-deep hover:underline">
-              {part.partNumber}
-            </Link>
-            {containsCadmium(part.parameters) && <CadmiumMark />}
-          </span>
-          <span className="text-xs text-ink-soft">{part.manufacturer.name}</span>
-          {part.package && <span className="text-xs text-ink-faint">{packageLabel(part.package)}</span>}
-        </span>
-      );
-    },
+    cell: ({ row }) => <PartCell part={row.original.part} />,
   }),
   column.display({
     id: 'score',

@@ -1,9 +1,9 @@
 import { createColumnHelper, type ColumnDef } from '@tanstack/react-table';
 import { formatQuantity, type DerivedNeed, type Margin, type PositionMatch, type PositionResults } from '@understudy/shared-types';
 import { useMemo } from 'react';
-import { Link } from 'react-router';
-import { Badge, CadmiumMark, EmptyState, LifecycleBadge, cx } from '../../../components/ui';
-import { containsCadmium, packageLabel, pinLayoutFor } from '../../../lib/part-display';
+import { PartCell } from './part-cell';
+import { Badge, EmptyState, LifecycleBadge, cx } from '../../../components/ui';
+import { pinLayoutFor } from '../../../lib/part-display';
 import { formatNeedMargin } from '../lib/display';
 import { ExpandableTable, type ColumnMeta } from './expandable-table';
 import { ScoreBar } from './score-bar';
@@ -113,23 +113,7 @@ const LEADING: ColumnDef<PositionMatch, any>[] = [
   column.display({
     id: 'part',
     header: 'Part',
-    cell: ({ row }) => {
-      const part = row.original.part;
-      return (
-        <span className="flex flex-col">
-          <span className="inline-flex items-center gap-1.5 whitespace-nowrap">
-            <Link to={`/parts/${part.id}`} className="font-semibold text-ink underline-offset-2 hover:text-copper-deep hover:underline">
-              {part.partNumber}
-            </Link>
-            {containsCadmium(part.parameters) && <CadmiumMark />}
-          </span>
-          <span className="text-xs text-ink-faint">
-            {part.manufacturer.name}
-            {part.package ? ` · ${packageLabel(part.package)}` : ''}
-          </span>
-        </span>
-      );
-    },
+    cell: ({ row }) => <PartCell part={row.original.part} />,
   }),
   column.display({
     id: 'score',

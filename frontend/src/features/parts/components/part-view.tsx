@@ -14,7 +14,7 @@ import {
   buttonClasses,
 } from '../../../components/ui';
 import { Can } from '../../../lib/ability';
-import { PartQueryState } from './part-query-state';
+import { PartQueryState } from '../../../components/ui/part-query-state';
 import { formatDate } from '../../../lib/format';
 import { containsCadmium, effectivePins, pinLayoutFor } from '../../../lib/part-display';
 import { useArchivePart } from '../api/archive-part';

@@ -1,12 +1,12 @@
-import type { PartDto } from '@understudy/shared-types';
 import type { UseQueryResult } from '@tanstack/react-query';
 import type { ReactNode } from 'react';
 import { Link } from 'react-router';
-import { EmptyState, ErrorState, LoadingState, buttonClasses } from '../../../components/ui';
-import { isApiClientError } from '../../../lib/api-client';
+import { isApiClientError } from '../../lib/api-client';
+import { buttonClasses } from './button';
+import { EmptyState, ErrorState, LoadingState } from './states';
 
 /** Loading, "no such part" and error states for a page built on one part; renders `children` once it has loaded. */
-export function PartQueryState({ query, children }: { query: UseQueryResult<PartDto>; children: (part: PartDto) => ReactNode }) {
+export function PartQueryState<T>({ query, children }: { query: UseQueryResult<T>; children: (part: T) => ReactNode }) {
   if (query.isPending) return <LoadingState label="Loading part…" />;
   if (query.isError) {
     if (isApiClientError(query.error) && query.error.status === 404) {
