@@ -98,6 +98,36 @@ export async function approvedEquivalentsAmong(db: Db, partIds: readonly string[
   return out;
 }
 
+/** An approved equivalent as an export names it: the other part by maker and number, with the use it was approved for. */
+export interface ExportedEquivalent {
+  manufacturer: string;
+  partNumber: string;
+  use: string;
+  note: string;
+}
+
+/** The approved equivalents of each part, for the catalog export; one query however many parts. */
+export async function approvedEquivalentsForExport(db: Db, partIds: readonly string[]): Promise<Map<string, ExportedEquivalent[]>> {
+  const out = new Map<string, ExportedEquivalent[]>();
+  if (!partIds.length) return out;
+  const rows: { part_id: string; manufacturer: string; part_number: string; use: string; note: string }[] = await db.query(
+    `SELECT side.part_id, m.name AS manufacturer, o.part_number, e.use, e.note
+       FROM equivalents e
+      CROSS JOIN LATERAL (VALUES (e.part_a, e.part_b), (e.part_b, e.part_a)) AS side(part_id, other_id)
+       JOIN parts o ON o.id = side.other_id
+       JOIN manufacturers m ON m.id = o.manufacturer_id
+      WHERE e.status = 'approved' AND side.part_id = ANY($1::uuid[])
+      ORDER BY side.part_id, o.part_number_key, e.use`,
+    [partIds],
+  );
+  for (const r of rows) {
+    const list = out.get(r.part_id) ?? [];
+    list.push({ manufacturer: r.manufacturer, partNumber: r.part_number, use: r.use, note: r.note });
+    out.set(r.part_id, list);
+  }
+  return out;
+}
+
 const snapshot = (e: Pick<Equivalent, 'partA' | 'partB' | 'status' | 'use' | 'note'>) => ({ partA: e.partA, partB: e.partB, status: e.status, use: e.use, note: e.note });
 
 function duplicate(use: string): ConflictError {

@@ -13,10 +13,22 @@ import {
   type PartDto,
 } from '@understudy/shared-types';
 import { BadRequestError, DomainError } from '../../errors';
+import type { ExportedEquivalent } from '../equivalents/equivalents.service';
 import { createPart, updatePart } from './parts.service';
 
 /** The columns every export has, before the parameter columns. */
-const BASE_COLUMNS = ['family', 'manufacturer', 'partNumber', 'description', 'lifecycle', 'rohsStatus', 'rohsNote', 'package', 'pinLayout', 'pinMap', 'tags'] as const;
+const BASE_COLUMNS = ['family', 'manufacturer', 'partNumber', 'description', 'lifecycle', 'rohsStatus', 'rohsNote', 'package', 'pinLayout', 'pinMap', 'tags', 'approvedEquivalents'] as const;
+
+/**
+ * A part as exported: the portable form plus its approved equivalents. The equivalents are for reading (a
+ * purchaser's spreadsheet); import ignores them, since a ruling is an editor's decision made in the app.
+ */
+export type ExportedPart = PartCreateBody & { approvedEquivalents: ExportedEquivalent[] };
+
+/** "Maker PN (use)", joined with "; " — the form a spreadsheet reader scans. */
+export function equivalentsCell(list: readonly ExportedEquivalent[]): string {
+  return list.map((e) => `${e.manufacturer} ${e.partNumber} (${e.use})`).join('; ');
+}
 const PARAM_PREFIX = 'param:';
 
 /** The portable form of a part: what import takes, export gives, and the seed is written in. */
@@ -46,7 +58,7 @@ function parameterColumns(): string[] {
   return columns;
 }
 
-export function partsToCsv(parts: PartCreateBody[]): string {
+export function partsToCsv(parts: ExportedPart[]): string {
   const columns = [...BASE_COLUMNS, ...parameterColumns()];
   const rows = parts.map((p) => {
     const row: Record<string, string> = {
@@ -61,6 +73,7 @@ export function partsToCsv(parts: PartCreateBody[]): string {
       pinLayout: p.pinLayout ?? '',
       pinMap: p.pinMap && Object.keys(p.pinMap).length ? JSON.stringify(p.pinMap) : '',
       tags: (p.tags ?? []).join('; '),
+      approvedEquivalents: equivalentsCell(p.approvedEquivalents),
     };
     for (const [key, v] of Object.entries(p.parameters ?? {})) {
       for (const slot of VALUE_SLOTS) if (v[slot] !== undefined) row[`${PARAM_PREFIX}${key}.${slot}`] = String(v[slot]);

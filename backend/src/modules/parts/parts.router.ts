@@ -4,6 +4,7 @@ import { z } from 'zod';
 import { IdParamsSchema, PartCreateBodySchema, PartListQuerySchema, PartUpdateBodySchema } from '@understudy/shared-types';
 import { authorize } from '../../middleware/authenticate';
 import { validate } from '../../middleware/validate';
+import { approvedEquivalentsForExport } from '../equivalents/equivalents.service';
 import { parseFilters } from './part-filters';
 import { searchParts } from './parts-search.service';
 import { importParts, partsToCsv, readImport, toPortable } from './parts-transfer.service';
@@ -30,7 +31,8 @@ export function partsRouter(db: DataSource): Router {
     ...validate({ query: ExportQuerySchema }, async ({ query }, req, res) => {
       const filters = parseFilters(query.family, req.query as Record<string, unknown>);
       const { items } = await searchParts(db, { ...query, page: 1 }, filters, { all: true });
-      const portable = items.map(toPortable);
+      const equivalents = await approvedEquivalentsForExport(db, items.map((p) => p.id));
+      const portable = items.map((p) => ({ ...toPortable(p), approvedEquivalents: equivalents.get(p.id) ?? [] }));
       const stamp = new Date().toISOString().slice(0, 10);
       if (query.format === 'json') {
         res.attachment(`understudy-parts-${stamp}.json`).type('application/json').send(JSON.stringify(portable, null, 2));

@@ -1,3 +1,4 @@
+import Papa from 'papaparse';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { PartCreateBodySchema, PartDtoSchema } from '@understudy/shared-types';
@@ -157,6 +158,27 @@ describe('import and export', () => {
     const normalise = (rows: unknown[]) => rows.map((r) => PartCreateBodySchema.parse(r));
     expect(normalise(fromCsv.rows)).toEqual(normalise(json));
     expect(json.length).toBeGreaterThanOrEqual(5);
+  });
+
+  it('flags approved equivalents in both exports, from either side of the pair, and leaves rejected ones out', async () => {
+    const use = 'fuzz gain stage';
+    await editor.post('/api/equivalents').send({ partId: ids.get('CV2207'), equivalentId: ids.get('OD-4558X'), status: 'approved', use, note: 'Measured in the test rig.' }).expect(201);
+    await editor.post('/api/equivalents').send({ partId: ids.get('CV2207'), equivalentId: ids.get('OD-10V'), status: 'rejected', use, note: 'Different supply.' }).expect(201);
+    const json = (await viewer.get('/api/parts/export').query({ format: 'json', family: 'op-amp' }).expect(200)).body as { partNumber: string; approvedEquivalents: unknown[] }[];
+    const of = (pn: string) => json.find((p) => p.partNumber === pn)!.approvedEquivalents;
+    expect(of('CV2207')).toEqual([{ manufacturer: 'Oddfellow Devices', partNumber: 'OD-4558X', use, note: 'Measured in the test rig.' }]);
+    expect(of('OD-4558X')).toEqual([{ manufacturer: 'Fixture Linear', partNumber: 'CV2207', use, note: 'Measured in the test rig.' }]);
+    expect(of('OD-10V')).toEqual([]);
+
+    const csv = await viewer.get('/api/parts/export').query({ format: 'csv', family: 'op-amp' }).buffer(true).parse((res, cb) => {
+      let data = '';
+      res.on('data', (c: Buffer) => (data += c.toString('utf8')));
+      res.on('end', () => cb(null, data));
+    });
+    const parsed = Papa.parse<Record<string, string>>(csv.body as string, { header: true });
+    expect(parsed.data.find((r) => r.partNumber === 'CV2207')?.approvedEquivalents).toBe(`Oddfellow Devices OD-4558X (${use})`);
+    // The column is for reading; an import of the same file still reads cleanly and ignores it.
+    expect(readImport(csv.body as string, 'text/csv').errors).toEqual([]);
   });
 
   it('dry-runs an import, reporting every bad row with its reason and changing nothing', async () => {
