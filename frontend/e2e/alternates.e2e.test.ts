@@ -65,7 +65,7 @@ describe(`alternates against ${BASE_URL}`, () => {
       expect(before.length).toBeGreaterThan(1);
       expect(before).not.toContain(OBSOLETE_OP_AMP);
       // Every row has a score out of 100 and a pinout class.
-      for (const cell of await table.locator('td[data-column="score"]').allTextContents()) expect(cell).toMatch(/^\d+ out of 100$/);
+      for (const cell of await table.locator('td[data-column="score"]').allTextContents()) expect(cell).toMatch(/^\d+(\.\d)? out of 100$/);
       for (const cell of await table.locator('td[data-column="pinout"]').allTextContents()) {
         expect(cell).toMatch(/Drop-in|Same pins, other places|Not pin compatible|Pinout unknown/);
       }
@@ -168,5 +168,64 @@ describe(`alternates against ${BASE_URL}`, () => {
       await context.close();
     }
     // A long journey through four pages; the suite's default is sized for one.
+  }, 120_000);
+
+  it('an editor approves an equivalent for the obsolete op amp and a viewer then sees it ranked first, flagged', async () => {
+    const use = 'any audio stage';
+    const editor = await newSession(browser);
+    const viewer = await newSession(browser);
+    let approved: string | undefined;
+    const openAlternates = async (page: Page) => {
+      await page.goto(`/parts?q=${encodeURIComponent(OBSOLETE_OP_AMP)}`);
+      await page.getByRole('table', { name: /Catalog results/ }).getByRole('link', { name: OBSOLETE_OP_AMP, exact: true }).click();
+      await page.getByRole('link', { name: `Alternates for ${OBSOLETE_OP_AMP}` }).click();
+      return settledRanking(page);
+    };
+    try {
+      await signIn(editor.page, 'editor@understudy.test');
+      const editorTable = await openAlternates(editor.page);
+      const before = await rankedPartNumbers(editorTable);
+      expect(before.length).toBeGreaterThan(2);
+      // The lowest-ranked stand-in, so being listed first can only come from the ruling.
+      approved = before[before.length - 1]!;
+      expect(before[0]).not.toBe(approved);
+
+      await editorTable.getByRole('button', { name: `Mark approved… ${approved}` }).click();
+      const dialog = editor.page.getByRole('dialog', { name: `Approve ${approved} for ${OBSOLETE_OP_AMP}` });
+      await dialog.getByLabel('For what use').fill(use);
+      await dialog.getByLabel(/Note/).fill('Checked on the bench in the demo overdrive.');
+      const saved = editor.page.waitForResponse((r) => new URL(r.url()).pathname === '/api/equivalents' && r.request().method() === 'POST');
+      await dialog.getByRole('button', { name: 'Save ruling' }).click();
+      expect((await saved).status()).toBe(201);
+      await dialog.waitFor({ state: 'hidden' });
+
+      // Another person, another browser: the viewer sees the approved part at the top with the editor's flag.
+      await signIn(viewer.page, 'viewer@understudy.test');
+      const viewerTable = await openAlternates(viewer.page);
+      const ranked = await rankedPartNumbers(viewerTable);
+      const rows = viewerTable.locator('tbody tr[data-row-id]');
+      const flagged = await Promise.all(ranked.map(async (_, i) => /Approved for /.test((await rows.nth(i).textContent()) ?? '')));
+      // Approved equivalents lead the list (by score among themselves), and the new one is among them.
+      const firstUnflagged = flagged.indexOf(false);
+      expect(flagged.slice(firstUnflagged)).not.toContain(true);
+      expect(ranked.indexOf(approved)).toBeLessThan(firstUnflagged === -1 ? ranked.length : firstUnflagged);
+      expect(await rows.nth(ranked.indexOf(approved)).textContent()).toContain(`Approved for ${use}`);
+      // A viewer reads rulings but cannot make them.
+      expect(await viewerTable.getByRole('button', { name: /^Mark approved…/ }).count()).toBe(0);
+      await screenshot(viewer.page, 'alternates-approved-first');
+    } finally {
+      // Leave the demo catalog as it was, so the suite can run again on the same data.
+      if (approved) {
+        const table = await openAlternates(editor.page);
+        const remove = table.getByRole('button', { name: `Remove ruling ${approved}` });
+        if (await remove.count()) {
+          await remove.click();
+          await editor.page.getByRole('dialog', { name: `Remove the ruling on ${approved}?` }).getByRole('button', { name: 'Remove ruling' }).click();
+          await editor.page.getByRole('dialog', { name: `Remove the ruling on ${approved}?` }).waitFor({ state: 'hidden' });
+        }
+      }
+      await editor.context.close();
+      await viewer.context.close();
+    }
   }, 120_000);
 });
