@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { FamilyKeySchema, ParameterValueSchema } from './families';
-import { PartDtoSchema } from './parts';
+import { LifecycleSchema, PartDtoSchema, RohsStatusSchema } from './parts';
 
 /**
  * The substitution contract. Scoring itself lives in ./substitution (pure functions, shared so the page can
@@ -123,6 +123,51 @@ export const AlternatesQuerySchema = z.object({
 });
 export type AlternatesQuery = z.input<typeof AlternatesQuerySchema>;
 
+/** What a home-made LED and photoresistor pair is estimated to do (estimateOptocoupler), with what was assumed. */
+export const OptoEstimateSchema = z.object({
+  resistanceOhms: z.object({ low: z.number(), typical: z.number(), high: z.number() }),
+  /** On-axis illuminance at the cell, before the spectral correction. */
+  illuminanceLux: z.number(),
+  /** The cell's relative response at the LED's peak, 0..1. */
+  spectralFactor: z.number().min(0).max(1),
+  assumptions: z.array(z.string()),
+  note: z.string(),
+});
+
+/**
+ * An LED and a photoresistor offered together in place of a resistive optocoupler, scored as the optocoupler they
+ * would make: on resistance from the estimate, off resistance from the cell's dark resistance, timings from the cell.
+ */
+export const RankedPairSchema = z.object({
+  /** `${led.id}+${cell.id}`: the pair has no catalog id of its own. */
+  id: z.string(),
+  led: CandidatePartSchema,
+  cell: CandidatePartSchema,
+  /** "LED PN + CELL PN". */
+  partNumber: z.string(),
+  /** The worse of the two parts'. */
+  lifecycle: LifecycleSchema,
+  rohsStatus: RohsStatusSchema,
+  score: z.number().min(0).max(100),
+  breakdown: z.array(BreakdownLineSchema),
+  /** Always two parts in place of one package: a layout change, never a drop-in. */
+  pinout: PinoutComparisonSchema,
+  /** The LED current and LED-to-cell spacing the estimate was made at. */
+  driveCurrentA: z.number().positive(),
+  spacingM: z.number().positive(),
+  estimate: OptoEstimateSchema,
+});
+export type RankedPair = z.infer<typeof RankedPairSchema>;
+
+export const RankedPairsSchema = z.object({
+  items: z.array(RankedPairSchema),
+  /** Pairs formed from the shortlisted LEDs and cells, ranked or turned down. */
+  considered: z.number().int(),
+  /** How the pairs were made (drive current, spacing) and why some or all were turned down, in plain words. */
+  note: z.string(),
+});
+export type RankedPairs = z.infer<typeof RankedPairsSchema>;
+
 export const AlternatesResponseSchema = z.object({
   original: CandidatePartSchema,
   weights: WeightsSchema,
@@ -130,6 +175,8 @@ export const AlternatesResponseSchema = z.object({
   considered: z.number().int(),
   items: z.array(RankedAlternateSchema),
   unsuitable: z.array(UnsuitableSchema),
+  /** For a resistive optocoupler, LED + photoresistor pairs that could stand in for it; null for other families. */
+  pairs: RankedPairsSchema.nullable().optional(),
 });
 export type AlternatesResponse = z.infer<typeof AlternatesResponseSchema>;
 

@@ -15,10 +15,29 @@ export {
 } from './formulas';
 export {
   estimateOptocoupler,
+  estimateOptocouplerFigures,
+  ledIlluminance,
   gainRangeFor,
   optoEstimateGaps,
   OPTO_ESTIMATE_NOTE,
   type OptoEstimate,
+  type OptoEstimateFigures,
   type OptoEstimateInput,
 } from './optocoupler-estimate';
 export { CELL_RESPONSE_FWHM_M, LIFECYCLE_SCORES, ROHS_SCORES } from './curves';
+export {
+  pairAsOptocoupler,
+  pairDriveCurrent,
+  pairId,
+  rankPairs,
+  ASSUMED_DRIVE_CURRENT_A,
+  PAIR_SPACING_M,
+  PAIRS_DROP_IN_NOTE,
+  PAIRS_SHOWN,
+  type PairDrive,
+  type PairOptions,
+  type PairRanking,
+  type PairRankOptions,
+  type PairResult,
+  type UnsuitablePair,
+} from './pairs';

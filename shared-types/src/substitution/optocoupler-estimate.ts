@@ -37,54 +37,68 @@ export function optoEstimateGaps(led: CandidatePart, cell: CandidatePart): strin
   return gaps;
 }
 
+function statedTestCurrent(led: CandidatePart): number | undefined {
+  const stated = led.parameters.luminousIntensity?.conditions?.current ?? led.parameters.forwardCurrent?.typ;
+  return stated !== undefined && stated > 0 ? stated : undefined;
+}
+
 /**
- * The resistance a photoresistor reaches when an LED at `spacingM` on axis runs at `ledCurrentA`:
- * E = Iv·(I/Itest)/d² (inverse-square law), times the cell's relative response at the LED's peak, then
- * R = R10·(E/10 lx)^(−γ), never above the dark resistance. Low and high carry the cell's light-resistance spread
- * and ±50 % on coupling. Throws a RangeError naming what is missing when no estimate can be made.
+ * On-axis illuminance an LED gives at `spacingM` and `ledCurrentA`: E = Iv·(I/Itest)/d² (inverse-square law, the
+ * intensity taken as proportional to current from its test current, else 20 mA). 0 for an LED stating no intensity.
  */
-export function estimateOptocoupler(input: OptoEstimateInput): OptoEstimate {
+export function ledIlluminance(led: CandidatePart, ledCurrentA: number, spacingM: number): number {
+  const iv = pick(led, 'luminousIntensity', TYP_FIRST) ?? 0;
+  return (iv * (ledCurrentA / (statedTestCurrent(led) ?? ASSUMED_TEST_CURRENT_A))) / spacingM ** 2;
+}
+
+/** The figures of an estimate without the words: what a ranking of many pairs needs before it shows a few. */
+export type OptoEstimateFigures = Omit<OptoEstimate, 'assumptions' | 'note'>;
+
+/**
+ * The estimate's arithmetic, saying what it assumed through `say` when one is given; the words are built only then,
+ * since formatting them costs more than the sums.
+ */
+function estimate(input: OptoEstimateInput, say: ((text: () => string) => void) | null): OptoEstimateFigures {
   const { led, cell, ledCurrentA, spacingM } = input;
   const gaps = optoEstimateGaps(led, cell);
   if (gaps.length > 0) throw new RangeError(`No estimate: ${gaps.join('; ')}.`);
   if (!(spacingM > 0)) throw new RangeError('No estimate: the spacing between LED and cell must be above zero.');
   if (!(ledCurrentA >= 0)) throw new RangeError('No estimate: the LED current must not be negative.');
+  const tell = say ?? (() => {});
 
   const mA = definition('led', 'forwardCurrent');
   const nm = definition('led', 'peakWavelength');
   const ohms = definition('photoresistor', 'lightResistance');
-  const assumptions: string[] = [];
 
-  const iv = pick(led, 'luminousIntensity', TYP_FIRST)!;
-  const stated = led.parameters.luminousIntensity?.conditions?.current ?? led.parameters.forwardCurrent?.typ;
-  const testCurrent = stated !== undefined && stated > 0 ? stated : ASSUMED_TEST_CURRENT_A;
-  if (testCurrent !== stated) {
-    assumptions.push(`The LED states no test current for its intensity; ${show(mA, testCurrent)} is assumed, a common test current.`);
+  const stated = statedTestCurrent(led);
+  const testCurrent = stated ?? ASSUMED_TEST_CURRENT_A;
+  if (stated === undefined) {
+    tell(() => `The LED states no test current for its intensity; ${show(mA, testCurrent)} is assumed, a common test current.`);
   }
-  assumptions.push(
-    `Luminous intensity is taken as proportional to current, from ${show(mA, testCurrent)}; real LEDs fall short of that at high currents.`,
-    'The LED is treated as a point source with the cell on its axis (inverse-square law); a lens, an off-axis cell or reflections inside an enclosure change the light reaching it.',
-  );
+  tell(() => `Luminous intensity is taken as proportional to current, from ${show(mA, testCurrent)}; real LEDs fall short of that at high currents.`);
+  tell(() => 'The LED is treated as a point source with the cell on its axis (inverse-square law); a lens, an off-axis cell or reflections inside an enclosure change the light reaching it.');
   const rated = led.parameters.forwardCurrent?.max;
   if (rated !== undefined && ledCurrentA > rated) {
-    assumptions.push(`${show(mA, ledCurrentA)} is above the LED's rated ${show(mA, rated)}: the LED may not survive it.`);
+    tell(() => `${show(mA, ledCurrentA)} is above the LED's rated ${show(mA, rated)}: the LED may not survive it.`);
   }
 
-  const illuminanceLux = (iv * (ledCurrentA / testCurrent)) / spacingM ** 2;
+  const illuminanceLux = ledIlluminance(led, ledCurrentA, spacingM);
 
   const ledPeak = pick(led, 'peakWavelength', TYP_FIRST);
   const cellPeak = pick(cell, 'peakWavelength', TYP_FIRST);
   let spectralFactor = 1;
   if (ledPeak === undefined) {
-    assumptions.push('The LED states no peak wavelength (a white LED has none to speak of); its light is taken as fully effective on the cell.');
+    tell(() => 'The LED states no peak wavelength (a white LED has none to speak of); its light is taken as fully effective on the cell.');
   } else if (cellPeak === undefined) {
-    assumptions.push('The cell states no peak response; the LED light is taken as fully effective on it.');
+    tell(() => 'The cell states no peak response; the LED light is taken as fully effective on it.');
   } else {
-    spectralFactor = spectralResponse(ledPeak - cellPeak, CELL_RESPONSE_FWHM_M);
-    assumptions.push(
-      `The cell's response around its ${show(nm, cellPeak)} peak is taken as a bell curve about 100 nm wide at half response (from memory, not from this cell's datasheet), giving ${Math.round(spectralFactor * 100)} % at the LED's ${show(nm, ledPeak)}.`,
-      "The cell's 10 lx rating is treated as if measured with light at its peak; datasheets usually rate it under a tungsten lamp (from memory), which this ignores.",
+    const factor = spectralResponse(ledPeak - cellPeak, CELL_RESPONSE_FWHM_M);
+    spectralFactor = factor;
+    tell(
+      () =>
+        `The cell's response around its ${show(nm, cellPeak)} peak is taken as a bell curve about 100 nm wide at half response (from memory, not from this cell's datasheet), giving ${Math.round(factor * 100)} % at the LED's ${show(nm, ledPeak)}.`,
     );
+    tell(() => "The cell's 10 lx rating is treated as if measured with light at its peak; datasheets usually rate it under a tungsten lamp (from memory), which this ignores.");
   }
 
   const lr = cell.parameters.lightResistance!;
@@ -94,18 +108,17 @@ export function estimateOptocoupler(input: OptoEstimateInput): OptoEstimate {
   let gamma = cell.parameters.gamma?.typ;
   if (!(gamma! > 0)) {
     gamma = ASSUMED_GAMMA;
-    assumptions.push(`The cell states no gamma; ${ASSUMED_GAMMA} is assumed, usual for CdS cells (from memory).`);
+    tell(() => `The cell states no gamma; ${ASSUMED_GAMMA} is assumed, usual for CdS cells (from memory).`);
   }
+  const g = gamma!;
   const dark = pick(cell, 'darkResistance', TYP_FIRST);
-  if (dark === undefined) assumptions.push('The cell states no dark resistance, so the estimate is not limited by it.');
-  assumptions.push(
-    `Resistance follows R = R10·(E/10 lx)^(−${gamma}) from the light resistance at 10 lx (${show(ohms, r10Low)}${r10High !== r10Low ? ` to ${show(ohms, r10High)}` : ''}).`,
-    'Low and high carry the spread of the light resistance and ±50 % on the light reaching the cell.',
-  );
+  if (dark === undefined) tell(() => 'The cell states no dark resistance, so the estimate is not limited by it.');
+  tell(() => `Resistance follows R = R10·(E/10 lx)^(−${g}) from the light resistance at 10 lx (${show(ohms, r10Low)}${r10High !== r10Low ? ` to ${show(ohms, r10High)}` : ''}).`);
+  tell(() => 'Low and high carry the spread of the light resistance and ±50 % on the light reaching the cell.');
 
   const effective = illuminanceLux * spectralFactor;
   const at = (r10: number, lux: number): number => {
-    const r = lux > 0 ? r10 * (lux / 10) ** -gamma! : Infinity;
+    const r = lux > 0 ? r10 * (lux / 10) ** -g : Infinity;
     return dark === undefined ? r : Math.min(r, dark);
   };
   return {
@@ -116,9 +129,24 @@ export function estimateOptocoupler(input: OptoEstimateInput): OptoEstimate {
     },
     illuminanceLux,
     spectralFactor,
-    assumptions,
-    note: OPTO_ESTIMATE_NOTE,
   };
+}
+
+/**
+ * The resistance a photoresistor reaches when an LED at `spacingM` on axis runs at `ledCurrentA`:
+ * E = Iv·(I/Itest)/d² (inverse-square law), times the cell's relative response at the LED's peak, then
+ * R = R10·(E/10 lx)^(−γ), never above the dark resistance. Low and high carry the cell's light-resistance spread
+ * and ±50 % on coupling. Throws a RangeError naming what is missing when no estimate can be made.
+ */
+export function estimateOptocoupler(input: OptoEstimateInput): OptoEstimate {
+  const assumptions: string[] = [];
+  const figures = estimate(input, (text) => assumptions.push(text()));
+  return { ...figures, assumptions, note: OPTO_ESTIMATE_NOTE };
+}
+
+/** estimateOptocoupler's figures alone, the same numbers without the words: for ranking many pairs. */
+export function estimateOptocouplerFigures(input: OptoEstimateInput): OptoEstimateFigures {
+  return estimate(input, null);
 }
 
 /**

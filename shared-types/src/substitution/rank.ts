@@ -31,10 +31,12 @@ interface Plan extends HardPlan {
 
 function makeHardPlan(original: CandidatePart, options: RankOptions): HardPlan {
   const op = options.operatingSupply;
+  const compared = pinComparer(original);
+  const given = options.pinoutOf;
   return {
     original,
     options,
-    pins: pinComparer(original),
+    pins: given ? { compare: (c) => given(c) ?? compared.compare(c) } : compared,
     channels: original.family === 'op-amp' ? countOf(original, 'channels') : undefined,
     gangs: original.family === 'potentiometer' ? countOf(original, 'gangs') : undefined,
     taper: original.family === 'potentiometer' ? choice(original, 'taper') : undefined,

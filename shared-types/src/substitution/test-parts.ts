@@ -131,3 +131,21 @@ export function ruling(part: CandidatePart, other: CandidatePart, status: 'appro
     updatedAt: '2024-01-01T00:00:00.000Z',
   };
 }
+
+/** A resistive optocoupler: 2 kΩ at 10 mA, 10 MΩ dark, 5 ms on and 50 ms off, a CdS cell under an exemption. */
+export function vactrol(partNumber = 'VX-2K', extra: Extra = {}): CandidatePart {
+  return testPart(
+    'optocoupler',
+    partNumber,
+    {
+      onResistance: { typ: 2e3, max: 4e3, conditions: { current: 10e-3 } },
+      offResistance: { min: 10e6 },
+      ledForwardVoltage: { typ: 2.0 },
+      ledMaxCurrent: { max: 40e-3 },
+      turnOnTime: { typ: 5e-3 },
+      turnOffTime: { typ: 50e-3 },
+      cellMaterial: { value: 'cds' },
+    },
+    { package: 'opto-4lead', pinLayout: 'optocoupler-4lead', rohsStatus: 'exempt', ...extra },
+  );
+}

@@ -1,4 +1,4 @@
-import type { CandidatePart, EquivalentDto, Weights } from '../alternates';
+import type { CandidatePart, EquivalentDto, PinoutComparison, Weights } from '../alternates';
 import type { FamilyKey } from '../families';
 
 /** One thing a substitute is judged on, with the weight it carries unless the user moves it. */
@@ -20,4 +20,9 @@ export interface RankOptions {
   pairedLed?: CandidatePart;
   /** Editor rulings keyed by the other part's id. Approved ones are listed first; rejected ones are unsuitable. */
   equivalents?: ReadonlyMap<string, EquivalentDto>;
+  /**
+   * A pinout stated from outside instead of compared pin by pin (undefined: compare as usual). A home-made LED and
+   * photoresistor pair has no package of its own, so there are no pins to compare.
+   */
+  pinoutOf?: (candidate: CandidatePart) => PinoutComparison | undefined;
 }
