@@ -13,3 +13,4 @@ export * from './parts';
 export * from './datasheets';
 export * from './alternates';
 export * from './substitution';
+export * from './boms';

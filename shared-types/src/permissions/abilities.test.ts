@@ -31,6 +31,14 @@ describe('defineAbilityFor', () => {
     expect(ability.can('update', subject('Bom', { ownerId: 'someone', sharedWith: ['u-viewer'] }))).toBe(false);
   });
 
+  it('lets each person read and mark only their own BOM alerts', () => {
+    for (const user of [viewer, editor, admin]) {
+      const ability = defineAbilityFor(user);
+      expect(ability.can('update', subject('Notification', { userId: user.id }))).toBe(true);
+      expect(ability.can('read', subject('Notification', { userId: 'someone-else' }))).toBe(false);
+    }
+  });
+
   it('lets an editor curate parts, datasheets and equivalents, but not people', () => {
     const ability = defineAbilityFor(editor);
     expect(ability.can('create', 'Part')).toBe(true);

@@ -23,15 +23,17 @@ export const SUBJECTS = [
   'Invitation',
   'Outbox',
   'AuditEvent',
+  'Notification',
 ] as const;
 export type SubjectName = (typeof SUBJECTS)[number];
 
 /** Records whose rules depend on who owns them or whom they are shared with. */
 export type OwnedBom = ForcedSubject<'Bom'> & { ownerId: string; sharedWith: string[] };
 export type OwnedRequirement = ForcedSubject<'Requirement'> & { ownerId: string };
+export type OwnedNotification = ForcedSubject<'Notification'> & { userId: string };
 
 /** A subject is a type name, or a tagged record where a rule has conditions. */
-export type AppSubject = SubjectName | 'all' | OwnedBom | OwnedRequirement;
+export type AppSubject = SubjectName | 'all' | OwnedBom | OwnedRequirement | OwnedNotification;
 export type AppAbility = MongoAbility<[Action, AppSubject]>;
 
 /** The fields of the signed-in person that rules depend on. */
@@ -50,6 +52,8 @@ export function defineAbilityFor(user: AbilityUser | null | undefined): AppAbili
   can('create', 'Bom');
   can(['read', 'update', 'delete'], 'Bom', { ownerId: user.id });
   can('read', 'Bom', { sharedWith: { $in: [user.id] } });
+  // Alerts about watched BOMs: each person reads and marks only their own.
+  can(['read', 'update'], 'Notification', { userId: user.id });
 
   if (user.role === 'editor' || user.role === 'admin') {
     can(['create', 'update', 'archive'], 'Part');
