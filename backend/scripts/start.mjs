@@ -77,7 +77,7 @@ await main(async () => {
       `  ${bold('Understudy is running:')} ${cyan(appUrl)}`,
       '',
       `  Demo accounts ${dim('(demo data only; never use these anywhere real)')}:`,
-      '    viewer@understudy.test   editor@understudy.test   admin@understudy.test',
+      '    viewer@understudy.test   purchaser@understudy.test   editor@understudy.test   admin@understudy.test',
       `    password: ${bold('understudy-demo')}`,
       '',
       `  ${outbox}`,

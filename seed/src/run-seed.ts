@@ -14,8 +14,8 @@ const db = createDataSource(url);
 await db.initialize();
 const report = await seedDemoData(db);
 console.log(
-  report.users || report.parts
-    ? `Seeded demo data: ${report.users} demo accounts, ${report.parts} catalog parts`
+  report.users || report.parts || report.equivalents
+    ? `Seeded demo data: ${report.users} demo accounts, ${report.parts} catalog parts, ${report.equivalents} rulings on equivalents`
     : 'Database already has people and parts; demo seed skipped',
 );
 await db.destroy();
