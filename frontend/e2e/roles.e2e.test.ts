@@ -14,9 +14,9 @@ afterAll(async () => {
 
 describe(`roles against ${BASE_URL}`, () => {
   it.each([
-    { role: 'viewer', email: 'viewer@understudy.test', nav: ['Home', 'Catalog', 'Positions', 'Datasheets'] },
-    { role: 'editor', email: 'editor@understudy.test', nav: ['Home', 'Catalog', 'Positions', 'Datasheets'] },
-    { role: 'admin', email: 'admin@understudy.test', nav: ['Home', 'Catalog', 'Positions', 'Datasheets', 'People', 'Outbox'] },
+    { role: 'viewer', email: 'viewer@understudy.test', nav: ['Home', 'Catalog', 'Positions', 'Datasheets', 'BOMs'] },
+    { role: 'editor', email: 'editor@understudy.test', nav: ['Home', 'Catalog', 'Positions', 'Datasheets', 'BOMs'] },
+    { role: 'admin', email: 'admin@understudy.test', nav: ['Home', 'Catalog', 'Positions', 'Datasheets', 'BOMs', 'People', 'Outbox'] },
   ])('the $role signs in and sees only their navigation', async ({ role, email, nav }) => {
     const { context, page } = await newSession(browser);
     try {
@@ -90,7 +90,7 @@ describe(`roles against ${BASE_URL}`, () => {
       await invitePage.getByRole('heading', { level: 1, name: 'Hello, Ingrid Invitee' }).waitFor();
       expect(new URL(invitePage.url()).pathname).toBe('/');
       expect(await invitePage.getByRole('main').getByText('Editor', { exact: true }).first().isVisible()).toBe(true);
-      expect(await mainNavLinks(invitePage)).toEqual(['Home', 'Catalog', 'Positions', 'Datasheets']);
+      expect(await mainNavLinks(invitePage)).toEqual(['Home', 'Catalog', 'Positions', 'Datasheets', 'BOMs']);
       await screenshot(invitePage, 'invitee-home');
     } finally {
       await admin.context.close();

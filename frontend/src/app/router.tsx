@@ -51,6 +51,18 @@ export const routes: RouteObject[] = [
             lazy: () => import('./routes/datasheet-review').then((m) => ({ Component: m.DatasheetReviewRoute })),
           },
           { path: 'compare', lazy: () => import('./routes/compare').then((m) => ({ Component: m.CompareRoute })) },
+          { path: 'boms', lazy: () => import('./routes/boms').then((m) => ({ Component: m.BomsRoute })) },
+          { path: 'boms/new', lazy: () => import('./routes/boms-new').then((m) => ({ Component: m.BomsNewRoute })) },
+          { path: 'boms/:id', lazy: () => import('./routes/boms-detail').then((m) => ({ Component: m.BomsDetailRoute })) },
+          {
+            path: 'boms/:id/report',
+            lazy: () => import('./routes/boms-report').then((m) => ({ Component: m.BomsReportRoute })),
+          },
+          { path: 'notices', lazy: () => import('./routes/notices').then((m) => ({ Component: m.NoticesRoute })) },
+          {
+            path: 'settings/alerts',
+            lazy: () => import('./routes/settings-alerts').then((m) => ({ Component: m.SettingsAlertsRoute })),
+          },
           {
             path: 'admin/people',
             lazy: () => import('./routes/admin-people').then((m) => ({ Component: m.AdminPeopleRoute })),

@@ -15,15 +15,15 @@ async function navLinks(role: Role) {
 
 describe('navigation by role', () => {
   it('shows a viewer Home, the Catalog and Positions', async () => {
-    expect(await navLinks('viewer')).toEqual(['Home', 'Catalog', 'Positions', 'Datasheets']);
+    expect(await navLinks('viewer')).toEqual(['Home', 'Catalog', 'Positions', 'Datasheets', 'BOMs']);
   });
 
   it('shows an editor Home, the Catalog and Positions', async () => {
-    expect(await navLinks('editor')).toEqual(['Home', 'Catalog', 'Positions', 'Datasheets']);
+    expect(await navLinks('editor')).toEqual(['Home', 'Catalog', 'Positions', 'Datasheets', 'BOMs']);
   });
 
   it('shows an admin People and Outbox as well', async () => {
-    expect(await navLinks('admin')).toEqual(['Home', 'Catalog', 'Positions', 'Datasheets', 'People', 'Outbox']);
+    expect(await navLinks('admin')).toEqual(['Home', 'Catalog', 'Positions', 'Datasheets', 'BOMs', 'People', 'Outbox']);
   });
 
   it('sends a signed-out visitor to sign in, remembering the page', async () => {

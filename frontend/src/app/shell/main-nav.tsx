@@ -16,6 +16,7 @@ export const NAV_ITEMS: NavItem[] = [
   { to: '/parts', label: 'Catalog', requires: { action: 'read', subject: 'Part' } },
   { to: '/positions', label: 'Positions', requires: { action: 'read', subject: 'Requirement' } },
   { to: '/datasheets', label: 'Datasheets', requires: { action: 'read', subject: 'Datasheet' } },
+  { to: '/boms', label: 'BOMs', requires: { action: 'read', subject: 'Bom' } },
   { to: '/admin/people', label: 'People', requires: { action: 'read', subject: 'User' } },
   { to: '/admin/outbox', label: 'Outbox', requires: { action: 'read', subject: 'Outbox' } },
 ];
