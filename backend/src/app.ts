@@ -11,6 +11,7 @@ import type { Mailer } from './mail/mailer';
 import { loadCurrentUser } from './middleware/authenticate';
 import { errorHandler, notFoundApi } from './middleware/error-handler';
 import { rejectCrossSite } from './middleware/same-origin';
+import { alertsRouter } from './modules/alerts/alerts.router';
 import { alternatesRouter } from './modules/alternates/alternates.router';
 import { datasheetsRouter } from './modules/datasheets/datasheets.router';
 import { auditEventsRouter } from './modules/audit-events/audit-events.router';
@@ -88,10 +89,11 @@ export function createApp({ config, db, mailer, storage, queue }: AppDeps): Buil
   app.use('/api/families', familiesRouter());
   app.use('/api/manufacturers', manufacturersRouter(db));
   app.use('/api', alternatesRouter(db));
-  app.use('/api', equivalentsRouter(db));
-  app.use('/api/parts', partsRouter(db));
+  app.use('/api', equivalentsRouter(db, queue));
+  app.use('/api/parts', partsRouter(db, queue));
   app.use('/api/datasheets', datasheetsRouter({ db, storage, queue, limits: config.datasheets }));
   app.use('/api/requirement-sets', requirementSetsRouter(db));
+  app.use('/api', alertsRouter(db));
   app.use('/api', notFoundApi);
 
   if (config.frontendDist && fs.existsSync(path.join(config.frontendDist, 'index.html'))) {

@@ -29,6 +29,10 @@ const EnvSchema = z.object({
   /** Parsing jobs this process works on at once; 0 leaves parsing to other processes. */
   DATASHEET_WORKERS: z.coerce.number().int().min(0).max(16).default(1),
   QUEUE_POLL_SECONDS: z.coerce.number().min(0.5).max(60).default(1),
+  /** When the daily alert digest goes out, as a cron expression in UTC. */
+  ALERT_DIGEST_CRON: z.string().trim().min(1).default('0 7 * * *'),
+  /** Alert fan-out jobs this process works on at once; 0 leaves them to other processes. */
+  ALERT_WORKERS: z.coerce.number().int().min(0).max(16).default(1),
 });
 
 export interface AppConfig {
@@ -45,6 +49,7 @@ export interface AppConfig {
   frontendDist?: string;
   signInRateLimit: { limit: number; windowMs: number };
   datasheets: { dir: string; maxBytes: number; maxFiles: number; maxPages: number; workers: number; pollSeconds: number };
+  alerts: { digestCron: string; workers: number };
 }
 
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
@@ -86,5 +91,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
       workers: e.DATASHEET_WORKERS,
       pollSeconds: e.QUEUE_POLL_SECONDS,
     },
+    alerts: { digestCron: e.ALERT_DIGEST_CRON, workers: e.ALERT_WORKERS },
   };
 }

@@ -2,6 +2,7 @@ import { createApp } from './app';
 import { loadConfig } from './config';
 import { createDataSource } from './data-source';
 import { createMailer } from './mail/mailer';
+import { startAlertWorkers } from './modules/alerts/alerts.worker';
 import { startDatasheetWorkers } from './modules/datasheets/datasheets.worker';
 import { createJobQueue } from './queue/job-queue';
 import { localFileStorage } from './storage/file-storage';
@@ -14,6 +15,7 @@ const storage = localFileStorage(config.datasheets.dir);
 const queue = createJobQueue(config.databaseUrl, { pollSeconds: config.datasheets.pollSeconds });
 await queue.start();
 await startDatasheetWorkers({ db, storage, limits: config.datasheets }, queue, config.datasheets.workers);
+await startAlertWorkers({ db, mailer, config }, queue, config.alerts);
 const { app, close } = createApp({ config, db, mailer, storage, queue });
 
 const server = app.listen(config.port, config.host, () => {

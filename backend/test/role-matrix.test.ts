@@ -62,6 +62,12 @@ export const ROUTE_ACCESS: Record<string, Access> = {
   'PATCH /api/requirement-sets/:id': 'signedIn',
   'DELETE /api/requirement-sets/:id': 'signedIn',
   'GET /api/requirement-sets/:id/results': 'signedIn',
+  // Everyone has their own notices and alert preference; another person's notice answers 404, not 403.
+  'GET /api/notifications': 'signedIn',
+  'POST /api/notifications/read-all': 'signedIn',
+  'POST /api/notifications/:id/read': 'signedIn',
+  'GET /api/me/alert-preferences': 'signedIn',
+  'PUT /api/me/alert-preferences': 'signedIn',
 };
 
 const SAMPLE_ID = '00000000-0000-4000-8000-000000000000';

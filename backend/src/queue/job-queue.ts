@@ -10,10 +10,30 @@ export interface JobQueue {
   send(name: string, data: object, tx?: EntityManager): Promise<void>;
   /** Runs `handler` for each job, `concurrency` at a time in this process. */
   work<T extends object>(name: string, concurrency: number, handler: (data: T) => Promise<void>): Promise<void>;
+  /** Sends a job to `name` on a cron schedule (UTC); scheduling the same queue again replaces the schedule. */
+  schedule(name: string, cron: string, data?: object): Promise<void>;
   stop(): Promise<void>;
 }
 
-export const QUEUES = { parseDatasheet: 'parse-datasheet' } as const;
+export const QUEUES = { parseDatasheet: 'parse-datasheet', fanOutPartChange: 'fan-out-part-change', alertDigest: 'alert-digest' } as const;
+
+type QueueName = (typeof QUEUES)[keyof typeof QUEUES];
+
+interface QueueOptions {
+  retryLimit: number;
+  retryDelay?: number;
+  retryBackoff?: boolean;
+  expireInSeconds: number;
+}
+
+/** A crashed worker's job expires after five minutes and is tried again, twice at most. */
+const DEFAULT_QUEUE_OPTIONS: QueueOptions = { retryLimit: 2, expireInSeconds: 300 };
+
+/** Alert jobs mostly fail because the mail server is away, so they wait between tries (30 s doubling, about 15 minutes). */
+const QUEUE_OPTIONS: Partial<Record<QueueName, QueueOptions>> = {
+  'fan-out-part-change': { retryLimit: 5, retryDelay: 30, retryBackoff: true, expireInSeconds: 300 },
+  'alert-digest': { retryLimit: 5, retryDelay: 30, retryBackoff: true, expireInSeconds: 900 },
+};
 
 /** `namespace` prefixes every queue name, so test contexts sharing one database never take each other's jobs. */
 export function createJobQueue(databaseUrl: string, { pollSeconds = 1, namespace = '' } = {}): JobQueue {
@@ -27,9 +47,9 @@ export function createJobQueue(databaseUrl: string, { pollSeconds = 1, namespace
     start() {
       started ??= (async () => {
         await boss.start();
-        for (const name of Object.values(QUEUES).map(queueName)) {
-          // A crashed worker's job expires after five minutes and is tried again, twice at most.
-          if (!(await boss.getQueue(name))) await boss.createQueue(name, { name, retryLimit: 2, expireInSeconds: 300 });
+        for (const base of Object.values(QUEUES)) {
+          const name = queueName(base);
+          if (!(await boss.getQueue(name))) await boss.createQueue(name, { name, ...(QUEUE_OPTIONS[base] ?? DEFAULT_QUEUE_OPTIONS) });
         }
       })();
       return started;
@@ -48,6 +68,10 @@ export function createJobQueue(databaseUrl: string, { pollSeconds = 1, namespace
           for (const job of jobs) await handler(job.data as never);
         });
       }
+    },
+    async schedule(name, cron, data = {}) {
+      await this.start();
+      await boss.schedule(queueName(name), cron, data, { tz: 'UTC' });
     },
     async stop() {
       if (!started) return;

@@ -111,7 +111,7 @@ export function datasheetsRouter(deps: DatasheetDeps): Router {
     authorize('review', 'Datasheet'),
     authorize('update', 'Part'),
     ...validate({ params: IdParamsSchema, body: DatasheetApplyBodySchema }, async ({ params, body }, req, res) => {
-      res.json(await applyDatasheet(db, req.user!.id, params.id, body));
+      res.json(await applyDatasheet(db, deps.queue, req.user!.id, params.id, body));
     }),
   );
 

@@ -305,7 +305,7 @@ export async function reviewProposal(db: DataSource, id: string, proposalId: str
  * Writes the reviewed values into the catalog through the parts service, so the optimistic-concurrency rule and
  * the revision history apply exactly as for a hand edit; the revision names this datasheet.
  */
-export async function applyDatasheet(db: DataSource, actorId: string, id: string, body: DatasheetApplyBody): Promise<DatasheetApplyResponse> {
+export async function applyDatasheet(db: DataSource, queue: JobQueue, actorId: string, id: string, body: DatasheetApplyBody): Promise<DatasheetApplyResponse> {
   const origin = { source: 'datasheet' as const, datasheetId: id };
   const partId = await db.transaction(async (tx) => {
     const sheet = await lockReviewable(tx, id);
@@ -320,7 +320,7 @@ export async function applyDatasheet(db: DataSource, actorId: string, id: string
       if (family && family !== current.family) {
         throw new DomainError(422, 'family_mismatch', `This datasheet describes a ${getFamily(family).label.toLowerCase()}, but ${current.partNumber} is a ${getFamily(current.family).label.toLowerCase()}.`);
       }
-      await updatePart(tx, actorId, body.partId, { version: body.version, parameters: { ...current.parameters, ...parameters } }, origin);
+      await updatePart(tx, queue, actorId, body.partId, { version: body.version, parameters: { ...current.parameters, ...parameters } }, origin);
       targetId = body.partId;
     } else {
       const pinMap = sheet.extraction.identity.pinMap?.value;

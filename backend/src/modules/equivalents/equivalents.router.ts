@@ -3,10 +3,11 @@ import type { DataSource } from 'typeorm';
 import { EquivalentBodySchema, EquivalentUpdateBodySchema, IdParamsSchema } from '@understudy/shared-types';
 import { authorize } from '../../middleware/authenticate';
 import { validate } from '../../middleware/validate';
+import type { JobQueue } from '../../queue/job-queue';
 import { createEquivalent, deleteEquivalent, listEquivalents, updateEquivalent } from './equivalents.service';
 
 /** Mounted at /api: a part's rulings live under the part, the rulings themselves under /equivalents. */
-export function equivalentsRouter(db: DataSource): Router {
+export function equivalentsRouter(db: DataSource, queue: JobQueue): Router {
   const router = Router();
 
   router.get(
@@ -21,7 +22,7 @@ export function equivalentsRouter(db: DataSource): Router {
     '/equivalents',
     authorize('create', 'Equivalent'),
     ...validate({ body: EquivalentBodySchema }, async ({ body }, req, res) => {
-      res.status(201).json(await createEquivalent(db, req.user!.id, body));
+      res.status(201).json(await createEquivalent(db, queue, req.user!.id, body));
     }),
   );
 
@@ -29,7 +30,7 @@ export function equivalentsRouter(db: DataSource): Router {
     '/equivalents/:id',
     authorize('update', 'Equivalent'),
     ...validate({ params: IdParamsSchema, body: EquivalentUpdateBodySchema }, async ({ params, body }, req, res) => {
-      res.json(await updateEquivalent(db, req.user!.id, params.id, body));
+      res.json(await updateEquivalent(db, queue, req.user!.id, params.id, body));
     }),
   );
 

@@ -3,6 +3,8 @@ import { z } from 'zod';
 import { getFamily, type EquivalentBodySchema, type EquivalentDto, type EquivalentUpdateBodySchema, type FamilyKey } from '@understudy/shared-types';
 import { EquivalentEntity, type Equivalent } from '../../entities';
 import { ConflictError, DomainError, NotFoundError } from '../../errors';
+import type { JobQueue } from '../../queue/job-queue';
+import { recordApprovedEquivalent } from '../alerts/alerts.service';
 import { recordAudit } from '../audit-events/audit-events.service';
 
 type Db = DataSource | EntityManager;
@@ -144,7 +146,8 @@ async function assertNoRuling(tx: EntityManager, partA: string, partB: string, u
   if (rows.length) throw duplicate(use);
 }
 
-export async function createEquivalent(db: DataSource, actorId: string, body: EquivalentInput): Promise<EquivalentDto> {
+/** An approved ruling is news for the BOMs using either part; the alerts record it in the ruling's transaction. */
+export async function createEquivalent(db: DataSource, queue: JobQueue, actorId: string, body: EquivalentInput): Promise<EquivalentDto> {
   if (body.partId === body.equivalentId) throw new DomainError(422, 'same_part', 'A part cannot be ruled an equivalent of itself.');
   const parts: { id: string; family: FamilyKey; part_number: string }[] = await db.query(`SELECT id, family, part_number FROM parts WHERE id = ANY($1::uuid[])`, [
     [body.partId, body.equivalentId],
@@ -166,6 +169,9 @@ export async function createEquivalent(db: DataSource, actorId: string, body: Eq
       const repo = tx.getRepository(EquivalentEntity);
       const saved = await repo.save(repo.create({ partA, partB, status: body.status, use: body.use, note: body.note, decidedById: actorId }));
       await recordAudit(tx, { actorId, action: 'equivalent.created', subjectType: 'Equivalent', subjectId: saved.id, after: snapshot(saved) });
+      if (saved.status === 'approved') {
+        await recordApprovedEquivalent(tx, queue, { equivalentId: saved.id, partIds: [partA, partB], use: saved.use, note: saved.note, actorId });
+      }
       return saved.id;
     });
     return present((await findRow(db, id))!, body.partId);
@@ -176,7 +182,7 @@ export async function createEquivalent(db: DataSource, actorId: string, body: Eq
   }
 }
 
-export async function updateEquivalent(db: DataSource, actorId: string, id: string, body: EquivalentUpdate): Promise<EquivalentDto> {
+export async function updateEquivalent(db: DataSource, queue: JobQueue, actorId: string, id: string, body: EquivalentUpdate): Promise<EquivalentDto> {
   try {
     await db.transaction(async (tx) => {
       const repo = tx.getRepository(EquivalentEntity);
@@ -193,6 +199,10 @@ export async function updateEquivalent(db: DataSource, actorId: string, id: stri
       if (next.use.toLowerCase() !== current.use.toLowerCase()) await assertNoRuling(tx, current.partA, current.partB, next.use, id);
       await repo.save(next);
       await recordAudit(tx, { actorId, action: 'equivalent.updated', subjectType: 'Equivalent', subjectId: id, before: snapshot(current), after: snapshot(next) });
+      // Only a ruling that turns approved is news; editing the note of an approved one is not.
+      if (next.status === 'approved' && current.status !== 'approved') {
+        await recordApprovedEquivalent(tx, queue, { equivalentId: id, partIds: [next.partA, next.partB], use: next.use, note: next.note, actorId });
+      }
     });
   } catch (err) {
     if (isUniqueViolation(err)) throw duplicate(body.use ?? '');

@@ -13,6 +13,7 @@ import {
   type PartDto,
 } from '@understudy/shared-types';
 import { BadRequestError, DomainError } from '../../errors';
+import type { JobQueue } from '../../queue/job-queue';
 import type { ExportedEquivalent } from '../equivalents/equivalents.service';
 import { createPart, updatePart } from './parts.service';
 
@@ -171,7 +172,7 @@ export class ImportRejectedError extends DomainError {
  * spreadsheet shows them (header = row 1 for CSV; first element = row 1 for JSON). Existing parts (same manufacturer
  * and part number) are updated, with a revision whose source is "import".
  */
-export async function importParts(db: DataSource, actorId: string, input: { rows: unknown[]; errors: ImportReport['errors'] }, options: { dryRun: boolean; csv: boolean }): Promise<ImportReport> {
+export async function importParts(db: DataSource, queue: JobQueue, actorId: string, input: { rows: unknown[]; errors: ImportReport['errors'] }, options: { dryRun: boolean; csv: boolean }): Promise<ImportReport> {
   if (input.rows.length > MAX_IMPORT_ROWS) throw new BadRequestError(`At most ${MAX_IMPORT_ROWS} rows per import.`, 'import_too_large');
   const errors = [...input.errors];
   const offset = options.csv ? 2 : 1;
@@ -215,7 +216,7 @@ export async function importParts(db: DataSource, actorId: string, input: { rows
       const match = byIdentity.get(`${part.manufacturer.toLowerCase()}|${partNumberKey(part.partNumber)}`);
       if (match) {
         const { family: _family, ...changes } = part;
-        await updatePart(tx, actorId, match.id, { ...changes, version: match.version }, 'import');
+        await updatePart(tx, queue, actorId, match.id, { ...changes, version: match.version }, 'import');
       } else {
         await createPart(tx, actorId, part, 'import');
       }

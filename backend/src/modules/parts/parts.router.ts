@@ -4,6 +4,7 @@ import { z } from 'zod';
 import { IdParamsSchema, PartCreateBodySchema, PartListQuerySchema, PartUpdateBodySchema } from '@understudy/shared-types';
 import { authorize } from '../../middleware/authenticate';
 import { validate } from '../../middleware/validate';
+import type { JobQueue } from '../../queue/job-queue';
 import { approvedEquivalentsForExport } from '../equivalents/equivalents.service';
 import { parseFilters } from './part-filters';
 import { searchParts } from './parts-search.service';
@@ -13,7 +14,7 @@ import { createPart, getPart, listRevisions, setArchived, updatePart } from './p
 const ExportQuerySchema = PartListQuerySchema.extend({ format: z.enum(['csv', 'json']).default('csv') });
 const ImportQuerySchema = z.object({ dryRun: z.enum(['0', '1', 'true', 'false']).optional() });
 
-export function partsRouter(db: DataSource): Router {
+export function partsRouter(db: DataSource, queue: JobQueue): Router {
   const router = Router();
 
   router.get(
@@ -50,7 +51,7 @@ export function partsRouter(db: DataSource): Router {
       const dryRun = query.dryRun === '1' || query.dryRun === 'true';
       const contentType = req.get('content-type');
       const rows = readImport(req.body, contentType);
-      res.json(await importParts(db, req.user!.id, rows, { dryRun, csv: !contentType?.includes('json') }));
+      res.json(await importParts(db, queue, req.user!.id, rows, { dryRun, csv: !contentType?.includes('json') }));
     }),
   );
 
@@ -74,7 +75,7 @@ export function partsRouter(db: DataSource): Router {
     '/:id',
     authorize('update', 'Part'),
     ...validate({ params: IdParamsSchema, body: PartUpdateBodySchema }, async ({ params, body }, req, res) => {
-      res.json(await updatePart(db, req.user!.id, params.id, body));
+      res.json(await updatePart(db, queue, req.user!.id, params.id, body));
     }),
   );
 

@@ -12,6 +12,8 @@ import {
 import { ManufacturerEntity, PartEntity, PartRevisionEntity, type Part } from '../../entities';
 import { ConflictError, DomainError, NotFoundError } from '../../errors';
 import { ValidationError } from '../../middleware/validate';
+import type { JobQueue } from '../../queue/job-queue';
+import { recordLifecycleChange } from '../alerts/alerts.service';
 import { presentPart } from './parts.presenter';
 
 /** A stale edit: carries the part as it is now so the client can show what changed meanwhile. */
@@ -131,9 +133,10 @@ export async function createPart(db: DataSource | EntityManager, actorId: string
 
 /**
  * Optimistic concurrency: the edit names the version it started from. The row is locked, the version compared,
- * and only then written, so two editors can never overwrite each other silently.
+ * and only then written, so two editors can never overwrite each other silently. A lifecycle change is recorded
+ * for the BOM alerts in the same transaction (hence the queue).
  */
-export async function updatePart(db: DataSource | EntityManager, actorId: string | null, id: string, body: PartUpdateBody, source: RevisionOrigin = 'edit'): Promise<PartDto> {
+export async function updatePart(db: DataSource | EntityManager, queue: JobQueue, actorId: string | null, id: string, body: PartUpdateBody, source: RevisionOrigin = 'edit'): Promise<PartDto> {
   const run = async (tx: EntityManager) => {
     const repo = tx.getRepository(PartEntity);
     const part = await repo.createQueryBuilder('p').setLock('pessimistic_write').where('p.id = :id', { id }).getOne();
@@ -176,6 +179,7 @@ export async function updatePart(db: DataSource | EntityManager, actorId: string
     next.version = part.version + 1;
     const saved = await repo.save(next);
     await writeRevision(tx, id, saved.version, actorId, source, changes);
+    if (saved.lifecycle !== part.lifecycle) await recordLifecycleChange(tx, queue, { partId: id, before: part.lifecycle, after: saved.lifecycle, actorId });
     return presentPart(saved, manufacturer.name);
   };
   return db.transaction(run);
