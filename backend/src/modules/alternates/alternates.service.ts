@@ -23,6 +23,7 @@ import { ValidationError } from '../../middleware/validate';
 import { approvedEquivalentsAmong, equivalentsByOtherPart } from '../equivalents/equivalents.service';
 import { parameterSql } from '../parts/parameter-index-sql';
 import { CANDIDATE_COLUMNS, candidateFromRow, loadCandidate, type CandidateRow } from './candidate-parts';
+import { findPairs } from './pairs-shortlist';
 import { alternatesCloseness, COUNT_PARAMETER, positionCloseness, type Closeness } from './shortlist-sql';
 
 export type AlternatesInput = z.output<typeof AlternatesQuerySchema>;
@@ -263,6 +264,22 @@ export async function alternatesSqlOnly(db: DataSource, partId: string, query: A
 
 export async function findAlternates(db: DataSource, partId: string, query: AlternatesInput): Promise<AlternatesResponse> {
   const { original, options: base, plan, pageSize } = await planAlternates(db, partId, query);
+  // For a resistive optocoupler, LED + photoresistor pairs too: their own shortlists, queried alongside the ranking.
+  const [alternates, pairs] = await Promise.all([
+    rankAlternatesOf(db, original, base, plan, pageSize, query.limit),
+    original.family === 'optocoupler' ? findPairs(db, original, { ...base, allowObsolete: query.allowObsolete }) : null,
+  ]);
+  return { ...alternates, pairs };
+}
+
+async function rankAlternatesOf(
+  db: DataSource,
+  original: CandidatePart,
+  base: AlternatesPlan['options'],
+  plan: Plan,
+  pageSize: number,
+  limit: number,
+): Promise<Omit<AlternatesResponse, 'pairs'>> {
   const [equivalents, failingRows] = await Promise.all([
     equivalentsByOtherPart(db, original.id),
     plan.failing ? (db.query(plan.failing.sql, plan.failing.values) as Promise<CandidateRow[]>) : Promise.resolve([]),
@@ -274,7 +291,7 @@ export async function findAlternates(db: DataSource, partId: string, query: Alte
     pageSize,
     [...equivalents.keys()],
     (candidates) => rankAlternates(original, candidates, options),
-    (r) => r.items.length >= query.limit,
+    (r) => r.items.length >= limit,
   );
 
   // The sample that failed in SQL is worded by the engine; one it would pass after all (it cannot know more than
@@ -291,7 +308,7 @@ export async function findAlternates(db: DataSource, partId: string, query: Alte
     original,
     weights: options.weights,
     considered,
-    items: ranked.items.slice(0, query.limit),
+    items: ranked.items.slice(0, limit),
     unsuitable: unsuitable.slice(0, UNSUITABLE_SHOWN),
   };
 }

@@ -211,3 +211,126 @@ describe('ranking for a position', () => {
     expect(paths).toEqual(expect.arrayContaining(['body.family', 'body.supply.volts']));
   });
 });
+
+describe('LED + photoresistor pairs for an optocoupler', () => {
+  // At the original's 10 mA and the assumed 5 mm, the 50 mcd (at 20 mA) green LED gives
+  // E = Iv·(I/Itest)/d² = 0.05 cd × ½ / (5 mm)² = 1000 lx (inverse-square law of illuminance, textbook photometry);
+  // a cell of 10 kΩ to 40 kΩ at 10 lx with γ = 0.5 then sits at R = R10·(E/10 lx)^−γ = 20 kΩ × 100^−0.5 = 2 kΩ
+  // (the gamma law, common practice, no source): the original's own on resistance.
+  const cell = (partNumber: string, over: Record<string, unknown> = {}, lifecycle: PartCreateBody['lifecycle'] = 'active'): PartCreateBody => ({
+    family: 'photoresistor',
+    manufacturer: 'Quillon Semiconductor',
+    partNumber,
+    lifecycle,
+    rohsStatus: 'exempt',
+    package: 'radial',
+    pinLayout: 'photoresistor-2lead',
+    parameters: {
+      lightResistance: { min: 10e3, max: 40e3 },
+      darkResistance: { min: 10e6 },
+      gamma: { typ: 0.5 },
+      peakWavelength: { typ: 540e-9 },
+      riseTime: { typ: 5e-3 },
+      decayTime: { typ: 50e-3 },
+      cellMaterial: { value: 'cds' },
+      ...over,
+    } as PartCreateBody['parameters'],
+  });
+  const led = (partNumber: string, over: Record<string, unknown> = {}, lifecycle: PartCreateBody['lifecycle'] = 'active'): PartCreateBody => ({
+    family: 'led',
+    manufacturer: 'Brackenridge Audio',
+    partNumber,
+    lifecycle,
+    rohsStatus: 'compliant',
+    package: 'led-5mm',
+    pinLayout: 'led-2lead',
+    parameters: {
+      colour: { value: 'green' },
+      peakWavelength: { typ: 540e-9 },
+      forwardCurrent: { typ: 20e-3, max: 30e-3 },
+      luminousIntensity: { typ: 0.05, conditions: { current: 20e-3 } },
+      ...over,
+    } as PartCreateBody['parameters'],
+  });
+  const PAIR_PARTS: PartCreateBody[] = [
+    {
+      family: 'optocoupler',
+      manufacturer: 'Quillon Semiconductor',
+      partNumber: 'QS-VTL3',
+      package: 'opto-4lead',
+      pinLayout: 'optocoupler-4lead',
+      rohsStatus: 'exempt',
+      parameters: {
+        onResistance: { typ: 2e3, max: 4e3, conditions: { current: 10e-3 } },
+        offResistance: { min: 10e6 },
+        ledMaxCurrent: { max: 40e-3 },
+        turnOnTime: { typ: 5e-3 },
+        turnOffTime: { typ: 50e-3 },
+        cellMaterial: { value: 'cds' },
+      },
+    },
+    led('BA-LED-540'),
+    led('BA-LED-5MA', { forwardCurrent: { typ: 2e-3, max: 5e-3 } }),
+    led('BA-LED-OLD', {}, 'obsolete'),
+    led('BA-LED-GONE'),
+    cell('QS-LDR-2K'),
+    cell('QS-LDR-20K', { lightResistance: { min: 100e3, max: 400e3 } }),
+    cell('QS-LDR-SLOW', { decayTime: { typ: 500e-3 } }),
+  ];
+
+  beforeAll(async () => {
+    for (const p of PAIR_PARTS) ids[p.partNumber] = (await createPart(ctx.db, null, PartCreateBodySchema.parse(p))).id;
+    await setArchived(ctx.db, editorId, ids['BA-LED-GONE']!, true);
+  });
+
+  const pairNames = (r: AlternatesResponse) => r.pairs!.items.map((p) => p.partNumber);
+
+  it('ranks LED + photoresistor pairs below the packaged alternates, the estimate nearest the original first', async () => {
+    const res = await alternates('QS-VTL3');
+    expect(ranked(res)).toEqual(expect.arrayContaining(['QS-VTL1', 'BA-VTL2']));
+    const pairs = res.pairs!;
+    expect(pairNames(res)[0]).toBe('BA-LED-540 + QS-LDR-2K');
+    const top = pairs.items[0]!;
+    expect(top.led.partNumber).toBe('BA-LED-540');
+    expect(top.cell.partNumber).toBe('QS-LDR-2K');
+    // E = 1000 lx (inverse-square law) and R = 20 kΩ × (1000/10)^−0.5 = 2 kΩ (gamma law), as worked above.
+    expect(top.estimate.illuminanceLux).toBeCloseTo(1000, 6);
+    expect(top.estimate.resistanceOhms.typical).toBeCloseTo(2000, 3);
+    expect(top.driveCurrentA).toBe(10e-3);
+    expect(top.spacingM).toBe(5e-3);
+    expect(top.estimate.note).toMatch(/bench/);
+    expect(top.estimate.assumptions.join(' ')).toMatch(/5 mm from the cell.*common practice, no source/);
+    // The breakdown adds up to the score, and the pinout line says the layout changes.
+    expect(100 + top.breakdown.reduce((sum, line) => sum + line.points, 0)).toBeCloseTo(top.score, 1);
+    expect(top.breakdown.find((l) => l.criterion === 'pinout')!.reason).toMatch(/^two parts in place of one package/);
+    // A decade off on on resistance, and ten times the decay, both rank lower.
+    expect(pairNames(res).indexOf('BA-LED-540 + QS-LDR-20K')).toBeGreaterThan(0);
+    expect(pairNames(res).indexOf('BA-LED-540 + QS-LDR-SLOW')).toBeGreaterThan(0);
+    expect(pairs.note).toMatch(/10 mA \(the current the original's on resistance is stated at\)/);
+  });
+
+  it('leaves out LEDs rated below the drive current, archived ones and, unless allowed, obsolete ones', async () => {
+    const res = await alternates('QS-VTL3');
+    const ledsUsed = new Set(res.pairs!.items.map((p) => p.led.partNumber));
+    expect(ledsUsed).toEqual(new Set(['BA-LED-540']));
+    // BA-LED-G states no luminous intensity, so it cannot be estimated.
+    expect(res.pairs!.considered).toBe(1 * 5);
+    const allowed = await alternates('QS-VTL3', { allowObsolete: '1' });
+    const old = allowed.pairs!.items.find((p) => p.led.partNumber === 'BA-LED-OLD')!;
+    expect(old.lifecycle).toBe('obsolete');
+    expect(allowed.pairs!.items.some((p) => p.led.partNumber === 'BA-LED-5MA' || p.led.partNumber === 'BA-LED-GONE')).toBe(false);
+  });
+
+  it('carries the weights over to the pairs', async () => {
+    const res = await alternates('QS-VTL3', { weights: 'turnOffTime:0' });
+    const slow = res.pairs!.items.find((p) => p.partNumber === 'BA-LED-540 + QS-LDR-SLOW')!;
+    expect(slow.breakdown.find((l) => l.criterion === 'turnOffTime')!.points).toBe(0);
+  });
+
+  it('offers no pair when a drop-in is required, saying why, and none for another family', async () => {
+    const res = await alternates('QS-VTL3', { requireDropIn: '1' });
+    expect(res.pairs).toMatchObject({ items: [], considered: 0 });
+    expect(res.pairs!.note).toMatch(/never a drop-in/);
+    expect((await alternates('QS-2100')).pairs).toBeNull();
+  });
+});

@@ -8,6 +8,7 @@ import {
   PositionRequirementsSchema,
   rankAlternates,
   rankForPosition,
+  rankPairs,
   type FamilyKey,
   type PartCreateBody,
 } from '@understudy/shared-types';
@@ -100,6 +101,40 @@ function led(i: number): PartCreateBody {
   };
 }
 
+/** LEDs that state an intensity, for the pairs: drawn after the rest, so the other families stay as they were. */
+function brightLed(i: number): PartCreateBody {
+  return {
+    family: 'led',
+    manufacturer: r.pick(['Quillon Semiconductor', 'Brackenridge Audio']),
+    partNumber: `SL-LEDB${String(i).padStart(5, '0')}`,
+    lifecycle: r.pick(LIFECYCLES),
+    rohsStatus: r.pick(['compliant', 'compliant', 'unknown']),
+    parameters: {
+      peakWavelength: { typ: r.log(450e-9, 640e-9) },
+      forwardCurrent: { typ: 10e-3, max: r.pick([15e-3, 25e-3, 30e-3, 50e-3]) },
+      luminousIntensity: { typ: r.log(0.01, 5), conditions: { current: 20e-3 } },
+    },
+  };
+}
+
+function optocoupler(i: number): PartCreateBody {
+  return {
+    family: 'optocoupler',
+    manufacturer: 'Quillon Semiconductor',
+    partNumber: `SL-OC${String(i).padStart(5, '0')}`,
+    pinLayout: 'optocoupler-4lead',
+    package: 'opto-4lead',
+    parameters: {
+      onResistance: { typ: r.log(300, 20e3), conditions: { current: r.pick([5e-3, 10e-3, 20e-3]) } },
+      offResistance: { min: r.log(1e6, 100e6) },
+      ledMaxCurrent: { max: r.pick([25e-3, 40e-3]) },
+      turnOnTime: { typ: r.log(2e-3, 20e-3) },
+      turnOffTime: { typ: r.log(20e-3, 500e-3) },
+      cellMaterial: { value: 'cds' },
+    },
+  };
+}
+
 let ctx: TestContext;
 const N = { 'op-amp': 1200, photoresistor: 700 } as const;
 
@@ -143,6 +178,8 @@ beforeAll(async () => {
     ...Array.from({ length: N['op-amp'] }, (_, i) => opAmp(i)),
     ...Array.from({ length: N.photoresistor }, (_, i) => photocell(i)),
     ...Array.from({ length: 20 }, (_, i) => led(i)),
+    ...Array.from({ length: 100 }, (_, i) => brightLed(i)),
+    ...Array.from({ length: 8 }, (_, i) => optocoupler(i)),
   ]);
   await ctx.db.query('ANALYZE parts');
 });
@@ -205,6 +242,23 @@ describe('the alternates shortlist', () => {
       }
     }
   });
+
+  it("keeps the engine's own best pairs for an optocoupler, among every LED with every photoresistor", async () => {
+    const leds = await exhaustive('led');
+    const cells = await exhaustive('photoresistor');
+    // Every LED with every cell is some 80,000 pairs for the engine per original, so three originals.
+    for (const id of await originals('optocoupler', 3)) {
+      const original = (await loadCandidate(ctx.db, id))!;
+      for (const query of [{}, { allowObsolete: '1', weights: 'turnOffTime:5' }]) {
+        const parsed = AlternatesQuerySchema.parse(query);
+        const weights = (parseWeights(parsed.weights, 'optocoupler') as { weights: Record<string, number> }).weights;
+        const expected = rankPairs(original, leds, cells, { weights, allowObsolete: parsed.allowObsolete });
+        const got = (await findAlternates(ctx.db, id, parsed)).pairs!;
+        expect(got.items.map((p) => p.partNumber)).toEqual(expected.items.map((p) => p.partNumber));
+        expect(got.items.map((p) => p.score)).toEqual(expected.items.map((p) => p.score));
+      }
+    }
+  }, 60_000);
 
   it("keeps the engine's own top of the list for a position", async () => {
     const all = await exhaustive('op-amp');
