@@ -17,7 +17,7 @@ await main(async () => {
     await bootstrap();
     env.DATABASE_URL = databaseUrl('understudy');
   }
-  if (!process.env.SMTP_HOST) env.SMTP_PORT = String(portFromEnv('FAKE_SMTP_PORT', 2525));
+  if (!process.env.SMTP_HOST && !process.env.SMTP_PORT) env.SMTP_PORT = String(portFromEnv('FAKE_SMTP_PORT', 2525));
   const [cmd, args] = binCommand('tsx', ['backend/src/cli/send-alert-digest.ts']);
   const { code } = await run('alert digest', cmd, args, { cwd: repoRoot, env: childEnv(env) });
   await shutdown(code);

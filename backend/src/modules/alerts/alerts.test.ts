@@ -1,8 +1,9 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { PartCreateBodySchema, type OutboxMessage, type PartCreateBody } from '@understudy/shared-types';
-import { createTestContext, type TestContext } from '../../../test/context';
+import { createTestContext, waitForMail, type TestContext } from '../../../test/context';
 import type { User } from '../../entities';
 import type { Mailer } from '../../mail/mailer';
+import { QUEUES } from '../../queue/job-queue';
 import { createPart } from '../parts/parts.service';
 import { insertBom } from './alerts-fixtures';
 import { fanOutChange, sendDigests, type AlertDeps } from './alerts.service';
@@ -263,6 +264,27 @@ describe('daily digest', () => {
     expect(mailsTo(hal)).toHaveLength(1);
     const list = await agent.get('/api/notifications').expect(200);
     expect(list.body.items.every((n: { emailedAt: string | null }) => n.emailedAt !== null)).toBe(true);
+  });
+
+  it('the scheduled digest job sends the same digest through the queue', async () => {
+    const { agent, user: jo } = await ctx.agentFor('viewer');
+    await agent.put('/api/me/alert-preferences').send({ delivery: 'daily' }).expect(200);
+    const part = (await createPart(ctx.db, null, PartCreateBodySchema.parse({ family: 'op-amp', manufacturer: 'Brackenridge Audio', partNumber: 'BA-J1', lifecycle: 'active', parameters: { channels: { typ: 2 } } }))).id;
+    await insertBom(ctx.db, { ownerId: jo.id, name: 'Jo’s tuner', lines: [part] });
+    await setLifecycle(part, 'nrnd');
+    const [change] = await changesOf(part);
+    await settled(change!.id, 1);
+    await ctx.queue.send(QUEUES.alertDigest, {});
+    const digest = await waitForMail(ctx.mail, jo.email);
+    expect(digest.subject).toBe('Understudy daily digest: 1 change to parts in your BOMs');
+  });
+
+  it('keeps the digest on a schedule, in UTC, from the configured cron', async () => {
+    await startAlertWorkers(deps, ctx.queue, { digestCron: '30 6 * * 1-5', workers: 0 });
+    const rows: { name: string; timezone: string }[] = await ctx.db.query(`SELECT name, timezone FROM pgboss.schedule WHERE cron = '30 6 * * 1-5'`);
+    expect(rows).toHaveLength(1);
+    expect(rows[0]!.name).toMatch(/alert-digest$/);
+    expect(rows[0]!.timezone).toBe('UTC');
   });
 
   it("'off' keeps the notice in the app and mails nothing, now or in a digest", async () => {
