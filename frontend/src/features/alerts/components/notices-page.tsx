@@ -21,11 +21,11 @@ function Notice({ notice }: { notice: NotificationDto }) {
     >
       <div className="flex flex-wrap items-start justify-between gap-2">
         <div className="flex min-w-0 flex-col gap-0.5">
-          <p className="flex flex-wrap items-center gap-2">
-            <span className="font-semibold text-ink">{notice.title}</span>
+          <div className="flex flex-wrap items-center gap-2">
+            <h2 className="text-base font-semibold text-ink">{notice.title}</h2>
             <Badge tone={notice.kind === 'lifecycle' ? 'warning' : 'ok'}>{KIND_LABELS[notice.kind]}</Badge>
             {unread && <Badge tone="accent">Unread</Badge>}
-          </p>
+          </div>
           <time dateTime={notice.createdAt} className="text-xs text-ink-faint">
             {formatDateTime(notice.createdAt)}
             {notice.emailedAt ? ' · also e-mailed' : ''}
@@ -33,7 +33,7 @@ function Notice({ notice }: { notice: NotificationDto }) {
         </div>
         {unread && (
           <Button variant="ghost" size="sm" loading={markRead.isPending} onClick={() => markRead.mutate(notice.id)}>
-            Mark as read<span className="sr-only">: {notice.title}</span>
+            Mark as read<span className="sr-only"> ({notice.title})</span>
           </Button>
         )}
       </div>

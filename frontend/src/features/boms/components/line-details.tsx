@@ -121,7 +121,7 @@ function OptionRow({
           <span className="text-sm font-semibold text-ok">Chosen</span>
         ) : (
           <Button variant="secondary" size="sm" disabled={disabled} onClick={onUse}>
-            Use as replacement<span className="sr-only">: {part.partNumber}</span>
+            Use as replacement<span className="sr-only"> ({part.partNumber})</span>
           </Button>
         ))}
     </li>
@@ -256,7 +256,7 @@ export function LineDetails({ bomId, line, canEdit }: { bomId: string; line: Bom
                   </span>
                   {canEdit && (
                     <Button size="sm" disabled={busy} onClick={() => send({ partId: c.part.id })}>
-                      This one<span className="sr-only">: {c.part.partNumber}</span>
+                      This one<span className="sr-only"> ({c.part.partNumber})</span>
                     </Button>
                   )}
                 </li>
