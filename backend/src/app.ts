@@ -16,6 +16,7 @@ import { alternatesRouter } from './modules/alternates/alternates.router';
 import { datasheetsRouter } from './modules/datasheets/datasheets.router';
 import { auditEventsRouter } from './modules/audit-events/audit-events.router';
 import { authRouter } from './modules/auth/auth.router';
+import { bomJsonBody, bomsRouter } from './modules/boms/boms.router';
 import { SESSION_COOKIE } from './modules/auth/session';
 import { equivalentsRouter } from './modules/equivalents/equivalents.router';
 import { familiesRouter } from './modules/families/families.router';
@@ -57,6 +58,8 @@ export function createApp({ config, db, mailer, storage, queue }: AppDeps): Buil
   sessionPool.on('error', (err) => console.warn('[sessions] idle connection lost:', err.message));
   const PgStore = connectPgSimple(session);
 
+  // A BOM's text may run to 5 MB: its two POSTs get a wider JSON limit; the general parser then skips them.
+  app.use('/api/boms', bomJsonBody());
   app.use('/api', express.json({ limit: '1mb' }));
   app.use('/api', rejectCrossSite(config.allowedOrigins));
   app.use(
@@ -93,6 +96,7 @@ export function createApp({ config, db, mailer, storage, queue }: AppDeps): Buil
   app.use('/api/parts', partsRouter(db, queue));
   app.use('/api/datasheets', datasheetsRouter({ db, storage, queue, limits: config.datasheets }));
   app.use('/api/requirement-sets', requirementSetsRouter(db));
+  app.use('/api/boms', bomsRouter(db));
   app.use('/api', alertsRouter(db));
   app.use('/api', notFoundApi);
 

@@ -1,5 +1,10 @@
 import { AlertPreferenceEntity } from './AlertPreference';
 import { AuditEventEntity } from './AuditEvent';
+import { BomEntity } from './Bom';
+import { BomCheckEntity } from './BomCheck';
+import { BomLineEntity } from './BomLine';
+import { BomMappingMemoryEntity } from './BomMappingMemory';
+import { BomShareEntity } from './BomShare';
 import { DatasheetEntity } from './Datasheet';
 import { EquivalentEntity } from './Equivalent';
 import { InvitationEntity } from './Invitation';
@@ -14,6 +19,11 @@ import { UserEntity } from './User';
 
 export * from './AlertPreference';
 export * from './AuditEvent';
+export * from './Bom';
+export * from './BomCheck';
+export * from './BomLine';
+export * from './BomMappingMemory';
+export * from './BomShare';
 export * from './Datasheet';
 export * from './Equivalent';
 export * from './Invitation';
@@ -26,4 +36,4 @@ export * from './PasswordReset';
 export * from './RequirementSet';
 export * from './User';
 
-export const ENTITIES = [UserEntity, InvitationEntity, PasswordResetEntity, AuditEventEntity, ManufacturerEntity, PartEntity, PartRevisionEntity, DatasheetEntity, EquivalentEntity, RequirementSetEntity, PartChangeEntity, NotificationEntity, AlertPreferenceEntity];
+export const ENTITIES = [UserEntity, InvitationEntity, PasswordResetEntity, AuditEventEntity, ManufacturerEntity, PartEntity, PartRevisionEntity, DatasheetEntity, EquivalentEntity, RequirementSetEntity, BomEntity, BomLineEntity, BomCheckEntity, BomShareEntity, BomMappingMemoryEntity, PartChangeEntity, NotificationEntity, AlertPreferenceEntity];

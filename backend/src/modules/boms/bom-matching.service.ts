@@ -1,0 +1,115 @@
+// Matching a whole BOM against the catalog in bulk: one query for every distinct key and suffix variant, then one
+// similarity search for whatever is left, never a query per line.
+import type { DataSource, EntityManager } from 'typeorm';
+import { BOM_LIMITS } from '@understudy/shared-types';
+import type { StoredCandidate } from '../../entities';
+import { CANDIDATE_SIMILARITY, decideExact, decideFuzzy, keyVariants, type CatalogHit, type MatchResult } from './bom-match';
+import { TrigramIndex } from './bom-trigrams';
+
+type Db = DataSource | EntityManager;
+
+export interface MatchInput {
+  partNumber: string;
+  manufacturer: string | null;
+}
+
+/**
+ * Up to this many unknown numbers are searched one by one in PostgreSQL (pg_trgm, trigram index); more, and the
+ * catalog's keys are read once and searched in memory with the same similarity, which is far cheaper than a
+ * trigram index probe per line on a large catalog.
+ */
+export const SQL_SIMILARITY_MAX = 25;
+
+export async function matchLines(db: Db, lines: readonly MatchInput[]): Promise<MatchResult[]> {
+  const variants = lines.map((l) => (l.partNumber ? keyVariants(l.partNumber) : []));
+  const keys = [...new Set(variants.flatMap((vs) => vs.map((v) => v.key)).filter(Boolean))];
+  const hitsByKey = await exactHits(db, keys);
+
+  const results: (MatchResult | null)[] = lines.map((line, i) => {
+    if (!line.partNumber || !variants[i]![0]!.key) return { kind: 'unmatched', partId: null, detail: null, candidates: [] };
+    return decideExact(line.partNumber, line.manufacturer, variants[i]!, hitsByKey);
+  });
+
+  // The similarity search, on the key as written and on the key with its suffixes set aside.
+  const searchKeys = new Map<number, string[]>();
+  results.forEach((r, i) => {
+    if (r) return;
+    const vs = variants[i]!.filter((v) => v.key.length >= 3 && !v.removed.some((x) => x.kind === 'package-letter'));
+    const deepest = vs[vs.length - 1];
+    searchKeys.set(i, [...new Set([vs[0]?.key, deepest?.key].filter((k): k is string => !!k))]);
+  });
+  const near = await nearestParts(db, [...new Set([...searchKeys.values()].flat())]);
+  return results.map((r, i) => {
+    if (r) return r;
+    const byPart = new Map<string, StoredCandidate>();
+    for (const key of searchKeys.get(i) ?? []) {
+      for (const c of near.get(key) ?? []) if ((byPart.get(c.partId)?.similarity ?? -1) < c.similarity) byPart.set(c.partId, c);
+    }
+    const ranked = [...byPart.values()].sort((a, b) => b.similarity - a.similarity).slice(0, BOM_LIMITS.candidatesPerLine);
+    return decideFuzzy(ranked);
+  });
+}
+
+interface HitRow {
+  id: string;
+  part_number: string;
+  part_number_key: string;
+  manufacturer: string;
+}
+
+async function exactHits(db: Db, keys: string[]): Promise<Map<string, CatalogHit[]>> {
+  const out = new Map<string, CatalogHit[]>();
+  if (!keys.length) return out;
+  const rows: HitRow[] = await db.query(
+    `SELECT p.id, p.part_number, p.part_number_key, m.name AS manufacturer
+       FROM parts p JOIN manufacturers m ON m.id = p.manufacturer_id
+      WHERE NOT p.archived AND p.part_number_key = ANY($1::text[])
+      ORDER BY p.part_number_key, m.name, p.id`,
+    [keys],
+  );
+  for (const r of rows) {
+    const list = out.get(r.part_number_key) ?? [];
+    list.push({ id: r.id, partNumber: r.part_number, key: r.part_number_key, manufacturer: r.manufacturer });
+    out.set(r.part_number_key, list);
+  }
+  return out;
+}
+
+/**
+ * The closest catalog parts to each key (similarity ≥ CANDIDATE_SIMILARITY, best first, ties by key and id),
+ * at most candidatesPerLine per key.
+ */
+export async function nearestParts(db: Db, keys: string[], options: { inMemory?: boolean } = {}): Promise<Map<string, StoredCandidate[]>> {
+  const out = new Map<string, StoredCandidate[]>();
+  if (!keys.length) return out;
+  const limit = BOM_LIMITS.candidatesPerLine;
+  const inMemory = options.inMemory ?? keys.length > SQL_SIMILARITY_MAX;
+  if (!inMemory) {
+    const rows: { key: string; id: string; sim: number }[] = await db.query(
+      `SELECT q.key, c.id, c.sim
+         FROM unnest($1::text[]) AS q(key)
+         CROSS JOIN LATERAL (
+           SELECT p.id, similarity(p.part_number_key, q.key) AS sim
+             FROM parts p
+            WHERE NOT p.archived AND p.part_number_key % q.key AND similarity(p.part_number_key, q.key) >= $2
+            ORDER BY sim DESC, p.part_number_key, p.id
+            LIMIT $3) c`,
+      [keys, CANDIDATE_SIMILARITY, limit],
+    );
+    for (const r of rows) out.set(r.key, [...(out.get(r.key) ?? []), { partId: r.id, similarity: Number(r.sim) }]);
+    return out;
+  }
+
+  // One string of every key: far cheaper to send and split than 100,000 rows.
+  const [row]: { keys: string | null }[] = await db.query(`SELECT string_agg(part_number_key, ' ') AS keys FROM parts WHERE NOT archived`);
+  const index = new TrigramIndex([...new Set((row?.keys ?? '').split(' ').filter(Boolean))]);
+  const nearKeys = new Map(keys.map((k) => [k, index.nearest(k, limit, CANDIDATE_SIMILARITY)]));
+  const wanted = [...new Set([...nearKeys.values()].flat().map((n) => n.key))];
+  const hits = await exactHits(db, wanted);
+  for (const [key, near] of nearKeys) {
+    // A key held by several parts (several makers) gives each of them, in id order, as the SQL above does.
+    const parts = near.flatMap((n) => [...(hits.get(n.key) ?? [])].sort((a, b) => (a.id < b.id ? -1 : 1)).map((h) => ({ partId: h.id, similarity: n.similarity })));
+    if (parts.length) out.set(key, parts.slice(0, limit));
+  }
+  return out;
+}
