@@ -7,6 +7,7 @@ import type {
   PositionMatch,
   PositionResults,
   RankedAlternate,
+  RankedPair,
   RequirementSetDto,
   Unsuitable,
 } from '@understudy/shared-types';
@@ -41,6 +42,45 @@ export function makeRanked(part: PartDto, overrides: Partial<RankedAlternate> = 
     breakdown: [breakdownLine()],
     pinout: { class: 'drop-in', packageChange: null, differingPins: [], summary: 'Same functions on the same pins.' },
     equivalent: null,
+    ...overrides,
+  };
+}
+
+/** An LED + photoresistor pair scored as an optocoupler, with an estimate worked at 10 mA and 5 mm. */
+export function makeRankedPair(led: PartDto, cell: PartDto, overrides: Partial<RankedPair> = {}): RankedPair {
+  return {
+    id: `${led.id}+${cell.id}`,
+    led: candidateOf(led),
+    cell: candidateOf(cell),
+    partNumber: `${led.partNumber} + ${cell.partNumber}`,
+    lifecycle: 'active',
+    rohsStatus: 'exempt',
+    score: 74,
+    breakdown: [
+      breakdownLine({ criterion: 'onResistance', label: 'On resistance', original: '2 kΩ', candidate: '2 kΩ', points: 0, maxPoints: 21.4, reason: "estimated on resistance 2 kΩ matches the original's" }),
+      breakdownLine({
+        criterion: 'pinout',
+        label: 'Pinout',
+        original: 'opto-4lead',
+        candidate: 'led-5mm + radial',
+        points: -7.1,
+        maxPoints: 14.3,
+        reason: 'two parts in place of one package, so the board layout changes; never a drop-in: −7.1',
+      }),
+    ],
+    pinout: { class: 'adapter', packageChange: { from: 'opto-4lead', to: 'led-5mm + radial' }, differingPins: [], summary: 'Two parts in place of one package, so the board layout changes; never a drop-in.' },
+    driveCurrentA: 10e-3,
+    spacingM: 5e-3,
+    estimate: {
+      resistanceOhms: { low: 816, typical: 2000, high: 5660 },
+      illuminanceLux: 1000,
+      spectralFactor: 1,
+      assumptions: [
+        "The LED is driven at 10 mA: the current the original's on resistance is stated at.",
+        'The LED sits 5 mm from the cell, facing it and shielded from outside light, as in a usual home-made pair (common practice, no source).',
+      ],
+      note: 'An estimate from datasheet figures and the assumptions listed, to confirm on the bench before building on it.',
+    },
     ...overrides,
   };
 }

@@ -1,15 +1,27 @@
-import type { CandidatePart, RankedAlternate } from '@understudy/shared-types';
+import type { BreakdownLine, CandidatePart, RankedAlternate } from '@understudy/shared-types';
 import { PinoutDiagram, cx } from '../../../components/ui';
 import { effectivePins, packageLabel } from '../../../lib/part-display';
 import { formatPoints, formatScore } from '../lib/display';
 import { PinoutClassBadge } from './pinout-class-badge';
 
-function BreakdownTable({ original, item }: { original: CandidatePart; item: RankedAlternate }) {
+/** Where a candidate's points went, criterion by criterion, against the original. */
+export function BreakdownTable({
+  original,
+  name,
+  score,
+  breakdown,
+}: {
+  original: CandidatePart;
+  /** What the candidate column is headed with: a part number, or "LED + cell" for a pair. */
+  name: string;
+  score: number;
+  breakdown: readonly BreakdownLine[];
+}) {
   return (
     <div className="overflow-x-auto rounded-md border border-rule bg-card">
       <table className="w-full min-w-[40rem] border-collapse text-left text-sm">
         <caption className="px-3 py-2 text-left text-sm font-semibold text-ink">
-          Why {item.part.partNumber} scores {formatScore(item.score)}
+          Why {name} scores {formatScore(score)}
         </caption>
         <thead>
           <tr className="border-y border-rule bg-paper/60 text-xs font-semibold tracking-wider text-ink-soft uppercase">
@@ -20,7 +32,7 @@ function BreakdownTable({ original, item }: { original: CandidatePart; item: Ran
               {original.partNumber} <span className="font-normal normal-case">(original)</span>
             </th>
             <th scope="col" className="px-3 py-2">
-              {item.part.partNumber}
+              {name}
             </th>
             <th scope="col" className="px-3 py-2 text-right">
               Points
@@ -31,7 +43,7 @@ function BreakdownTable({ original, item }: { original: CandidatePart; item: Ran
           </tr>
         </thead>
         <tbody>
-          {item.breakdown.map((line) => {
+          {breakdown.map((line) => {
             const lost = line.points < 0;
             return (
               <tr key={line.criterion} data-criterion={line.criterion} className="border-b border-rule last:border-b-0">
@@ -104,7 +116,7 @@ function PinoutComparison({ original, item }: { original: CandidatePart; item: R
 export function AlternateDetails({ original, item }: { original: CandidatePart; item: RankedAlternate }) {
   return (
     <div className="flex flex-col gap-5 bg-paper/50 px-4 py-4" data-testid="alternate-details">
-      <BreakdownTable original={original} item={item} />
+      <BreakdownTable original={original} name={item.part.partNumber} score={item.score} breakdown={item.breakdown} />
       {item.equivalent?.note && (
         <p className="text-sm text-ink">
           <span className="font-semibold">Editor’s note{item.equivalent.decidedBy ? ` (${item.equivalent.decidedBy.name})` : ''}:</span>{' '}

@@ -34,6 +34,7 @@ import { keyFacts, supplySpanOf } from '../lib/display';
 import { isDefaultWeights, weightsFromParam, weightsParam } from '../lib/weights';
 import { AlternatesTable } from './alternates-table';
 import { OptocouplerPanel } from './optocoupler-panel';
+import { PairsSection } from './pairs-section';
 import { PartPicker } from './part-picker';
 import { UnsuitableList } from './unsuitable-list';
 import { WeightsPanel } from './weights-panel';
@@ -190,7 +191,11 @@ export function AlternatesPage({ partId }: { partId: string }) {
   const supplyRange = params.supply ? parseSupplySpan(params.supply, { unit: 'V' }) : undefined;
   const supplySpan = supplyRange?.ok ? { min: supplyRange.min, max: supplyRange.max } : undefined;
   const compareIds = [original.id, ...selected];
-  const anyCadmium = containsCadmium(original.parameters) || items.some((i) => containsCadmium(i.part.parameters));
+  const pairs = data?.pairs ?? null;
+  const anyCadmium =
+    containsCadmium(original.parameters) ||
+    items.some((i) => containsCadmium(i.part.parameters)) ||
+    !!pairs?.items.some((p) => containsCadmium(p.cell.parameters));
 
   function setWeight(key: string, value: number) {
     if (!weights || !family) return;
@@ -352,6 +357,22 @@ export function AlternatesPage({ partId }: { partId: string }) {
               )}
             </div>
           </Card>
+
+          {pairs && (
+            <PairsSection
+              original={original}
+              pairs={pairs}
+              busy={settling}
+              emptyAction={
+                // Once is enough: with no ranked alternates either, their empty state offers the same.
+                params.requireDropIn && items.length > 0 ? (
+                  <Button variant="secondary" size="sm" onClick={() => update({ requireDropIn: false })}>
+                    Allow other pinouts
+                  </Button>
+                ) : undefined
+              }
+            />
+          )}
 
           {series.length > 1 && (
             <Card className="px-5 py-4">
