@@ -186,6 +186,8 @@ export function BomLinesTable({
     },
     onExpandedChange: setExpanded,
     onPaginationChange: setPagination,
+    // Numbers would sort descending on the first click; a BOM reads from the top.
+    sortDescFirst: false,
     // A line saved from its details must stay open, on the same page.
     autoResetExpanded: false,
     autoResetPageIndex: false,
@@ -294,17 +296,18 @@ export function BomLinesTable({
             Lines {first.toLocaleString()}–{last.toLocaleString()} of {total.toLocaleString()}
           </p>
           <div className="flex items-center gap-2">
-            <InlineSelect
-              aria-label="Lines per page"
-              value={String(pageSize)}
-              onValueChange={(value) => table.setPageSize(Number(value))}
-              options={PAGE_SIZES.map((n) => ({ value: String(n), label: `${n} a page` }))}
-              className="w-28"
-            />
+            <div className="w-32">
+              <InlineSelect
+                aria-label="Lines per page"
+                value={String(pageSize)}
+                onValueChange={(value) => table.setPageSize(Number(value))}
+                options={PAGE_SIZES.map((n) => ({ value: String(n), label: `${n} a page` }))}
+              />
+            </div>
             <Button variant="secondary" size="sm" onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()}>
               Previous
             </Button>
-            <span className="text-ink-soft tabular-nums">
+            <span className="whitespace-nowrap text-ink-soft tabular-nums">
               Page {pageIndex + 1} of {pageCount}
             </span>
             <Button variant="secondary" size="sm" onClick={() => table.nextPage()} disabled={!table.getCanNextPage()}>

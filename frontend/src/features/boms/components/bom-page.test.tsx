@@ -355,6 +355,13 @@ describe('the BOM page', () => {
     expect(pages).toHaveTextContent('Lines 101–200 of 1,200');
     expect(cell(lineRows()[0]!, 'row')).toHaveTextContent('102');
 
+    // Sorting by row starts from the top of the sheet and goes back to the first page.
+    await user.click(screen.getByRole('button', { name: 'Row' }));
+    expect(pages).toHaveTextContent('Lines 1–100 of 1,200');
+    expect(cell(lineRows()[0]!, 'row')).toHaveTextContent('2');
+    await user.click(screen.getByRole('button', { name: 'Row' }));
+    expect(cell(lineRows()[0]!, 'row')).toHaveTextContent('1201');
+
     await user.type(screen.getByRole('searchbox', { name: 'Find in the lines' }), 'NW5150');
     await waitFor(() => expect(lineRows()).toHaveLength(1));
     expect(screen.getByRole('navigation', { name: 'Pages of lines' })).toHaveTextContent('Lines 1–1 of 1');
