@@ -1,4 +1,5 @@
 import type { DataSource } from 'typeorm';
+import { BomEntity, BomLineEntity, BomShareEntity } from '../../entities';
 
 /**
  * A saved BOM straight into the tables, for the alert tests: each entry of `lines` is a line matched to that part,
@@ -8,20 +9,55 @@ export async function insertBom(
   db: DataSource,
   input: { ownerId: string; name: string; watched?: boolean; lines: (string | { partId: string | null; replacementPartId: string })[]; sharedWith?: string[] },
 ): Promise<string> {
-  const rows: { id: string }[] = await db.query(
-    `INSERT INTO boms (owner_id, name, encoding, delimiter, has_header, columns, mapping, watched, line_count)
-     VALUES ($1, $2, 'text', ',', true, '["Part number"]', '{"partNumber":0}', $3, $4) RETURNING id`,
-    [input.ownerId, input.name, input.watched ?? true, input.lines.length],
+  const boms = db.getRepository(BomEntity);
+  const bom = await boms.save(
+    boms.create({
+      ownerId: input.ownerId,
+      name: input.name,
+      fileName: null,
+      encoding: 'text',
+      delimiter: ',',
+      hasHeader: true,
+      columns: ['Part number'],
+      mapping: { partNumber: 0 },
+      watched: input.watched ?? true,
+      lineCount: input.lines.length,
+      summary: null,
+      lastCheckedAt: null,
+    }),
   );
-  const bomId = rows[0]!.id;
-  for (const [i, line] of input.lines.entries()) {
-    const { partId, replacementPartId } = typeof line === 'string' ? { partId: line, replacementPartId: null } : line;
-    await db.query(
-      `INSERT INTO bom_lines (bom_id, position, row_number, cells, match_kind, part_id, replacement_part_id)
-       VALUES ($1, $2, $3, '[]', $4, $5, $6)`,
-      [bomId, i, i + 2, partId ? 'exact' : 'unmatched', partId, replacementPartId],
-    );
-  }
-  for (const userId of input.sharedWith ?? []) await db.query(`INSERT INTO bom_shares (bom_id, user_id) VALUES ($1, $2)`, [bomId, userId]);
-  return bomId;
+  const partNumbers = new Map<string, string>(
+    ((await db.query(`SELECT id, part_number FROM parts`)) as { id: string; part_number: string }[]).map((p) => [p.id, p.part_number]),
+  );
+  const lines = db.getRepository(BomLineEntity);
+  await lines.save(
+    input.lines.map((line, i) => {
+      const { partId, replacementPartId } = typeof line === 'string' ? { partId: line, replacementPartId: null } : line;
+      const partNumber = partId ? (partNumbers.get(partId) ?? '') : 'UNKNOWN-1';
+      return lines.create({
+        bomId: bom.id,
+        position: i,
+        rowNumber: i + 2,
+        cells: [partNumber],
+        partNumber,
+        partNumberKey: partNumber.toUpperCase().replace(/[\s-]/g, ''),
+        manufacturer: null,
+        quantity: 1,
+        designators: [],
+        notes: '',
+        problems: [],
+        // Confirmed, so a check of the BOM keeps the part the test put on the line.
+        matchKind: partId ? 'confirmed' : 'unmatched',
+        partId,
+        matchDetail: null,
+        candidates: [],
+        replacementPartId,
+        replacementNote: '',
+        replacementChosenById: replacementPartId ? input.ownerId : null,
+        replacementChosenAt: replacementPartId ? new Date() : null,
+      });
+    }),
+  );
+  if (input.sharedWith?.length) await db.getRepository(BomShareEntity).insert(input.sharedWith.map((userId) => ({ bomId: bom.id, userId })));
+  return bom.id;
 }

@@ -4,6 +4,7 @@ import type { AppConfig } from '../../config';
 import type { ApprovedEquivalentChange, NotifiedBom } from '../../entities';
 import type { Mailer } from '../../mail/mailer';
 import { QUEUES, type JobQueue } from '../../queue/job-queue';
+import { recheckBom } from '../boms/boms.service';
 import { alertMail, describeChange, digestMail, noticeBody, type ChangeFacts } from './alerts.templates';
 
 export interface AlertDeps {
@@ -136,7 +137,10 @@ export async function fanOutChange(deps: AlertDeps, changeId: string): Promise<F
          ON CONFLICT (user_id, change_id) DO NOTHING RETURNING id`,
         [userId, changeId, words.title, noticeBody(words, boms), JSON.stringify(boms)],
       );
-      inserted += rows.length;
+      if (!rows.length) continue;
+      inserted++;
+      // The BOM's history shows the change as a check of its own, once: a rerun inserts nothing and checks nothing.
+      for (const bom of boms) await recheckBom(tx, bom.id, { trigger: 'change', actorId: null });
     }
     return inserted;
   });

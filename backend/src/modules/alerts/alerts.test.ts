@@ -62,7 +62,7 @@ async function setLifecycle(partId: string, lifecycle: string) {
 
 beforeAll(async () => {
   ctx = await createTestContext();
-  await ctx.db.query('TRUNCATE notifications, part_changes, alert_preferences, boms, equivalents, part_revisions, parts, manufacturers CASCADE');
+  await ctx.db.query('TRUNCATE notifications, part_changes, alert_preferences, boms, bom_mapping_memory, equivalents, part_revisions, parts, manufacturers CASCADE');
   for (const p of PARTS) ids[p.partNumber] = (await createPart(ctx.db, null, PartCreateBodySchema.parse(p))).id;
   ({ agent: editor } = await ctx.agentFor('editor'));
   deps = { db: ctx.db, mailer: ctx.mailer, config: ctx.config };
@@ -124,11 +124,23 @@ describe('lifecycle alerts', () => {
     expect(notices.map((n) => n.user_id).sort()).toEqual([ada.id, ben.id].sort());
   });
 
+  it("shows the change in each affected BOM's check history, and only there", async () => {
+    const checks = async (bomId: string) =>
+      (await ctx.db.query(`SELECT trigger, summary FROM bom_checks WHERE bom_id = $1`, [bomId])) as { trigger: string; summary: { obsolete: number } }[];
+    expect(await checks(bomIds.fuzz!)).toEqual([expect.objectContaining({ trigger: 'change', summary: expect.objectContaining({ obsolete: 2 }) })]);
+    expect(await checks(bomIds.tremolo!)).toEqual([expect.objectContaining({ trigger: 'change' })]);
+    expect(await checks(bomIds.ben!)).toHaveLength(1);
+    // Not watched: not checked either.
+    expect(await checks(bomIds.cy!)).toEqual([]);
+  });
+
   it('sends nothing new when the same fan-out runs again', async () => {
     const [change] = await changesOf(ids['QS-A4558']!);
     expect(await fanOutChange(deps, change!.id)).toEqual({ notified: 0, emailed: 0 });
     expect(await fanOutChange(deps, change!.id)).toEqual({ notified: 0, emailed: 0 });
     expect(ctx.mail.messages()).toHaveLength(0);
+    const checks: unknown[] = await ctx.db.query(`SELECT 1 FROM bom_checks WHERE bom_id = $1`, [bomIds.fuzz]);
+    expect(checks).toHaveLength(1);
     const counted: { count: number }[] = await ctx.db.query(`SELECT count(*)::int AS count FROM notifications WHERE change_id = $1`, [change!.id]);
     expect(counted[0]!.count).toBe(2);
   });
