@@ -15,6 +15,7 @@ installSignalHandlers();
 const BENCHES = {
   search: { file: 'search.bench.ts', database: true },
   alternates: { file: 'alternates.bench.ts', database: true },
+  bom: { file: 'bom.bench.ts', database: true },
   extract: { file: 'extract.bench.ts', database: false },
 };
 

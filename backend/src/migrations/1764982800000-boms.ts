@@ -91,8 +91,9 @@ export class Boms1764982800000 implements MigrationInterface {
         updated_at timestamptz NOT NULL DEFAULT now()
       )`);
 
-    // A BOM check looks up every distinct part number at once by equality; the trigram index cannot serve that.
-    await q.query(`CREATE INDEX parts_pn_key_idx ON parts (part_number_key) WHERE NOT archived`);
+    // A BOM check looks up every distinct part number at once by equality, which the trigram index cannot serve;
+    // with the id, maker and number included the lookup never reads the wide rows (an index-only scan).
+    await q.query(`CREATE INDEX parts_pn_key_idx ON parts (part_number_key) INCLUDE (id, manufacturer_id, part_number) WHERE NOT archived`);
   }
 
   async down(q: QueryRunner): Promise<void> {

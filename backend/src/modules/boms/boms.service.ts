@@ -419,14 +419,18 @@ export interface RecheckOptions {
   actorId: string | null;
 }
 
-/**
- * Matches every line the user has not confirmed against today's catalog again, judges every line, and records a
- * check whose `changes` name the lines whose status moved since the check before. Checks of one BOM take turns.
- */
-export async function recheckBom(db: Db, bomId: string, { trigger, actorId }: RecheckOptions): Promise<BomCheckDto> {
-  const checkId = await db.transaction(async (tx) => {
+interface Rechecked {
+  checkId: string;
+  row: BomRow;
+  lines: BomLineDto[];
+  summary: BomSummary;
+}
+
+async function recheck(db: Db, bomId: string, { trigger, actorId }: RecheckOptions, ability?: AppAbility): Promise<Rechecked> {
+  return db.transaction(async (tx) => {
     const row = await findBomRow(tx, bomId, true);
     if (!row) throw notFound();
+    if (ability) assertCan(ability, 'update', accessOf(row));
     const started = performance.now();
     const stored = await loadLines(tx, bomId);
     const automatic = stored.filter((l) => l.matchKind !== 'confirmed');
@@ -448,17 +452,26 @@ export async function recheckBom(db: Db, bomId: string, { trigger, actorId }: Re
       [bomId],
     );
     const changes = describeChanges(previous[0]?.line_statuses ?? null, lines);
-    return insertCheck(tx, bomId, trigger, actorId, summary, changes, lines.map((l) => l.status), ms(started));
+    const checkId = await insertCheck(tx, bomId, trigger, actorId, summary, changes, lines.map((l) => l.status), ms(started));
+    return { checkId, row, lines, summary };
   });
+}
+
+/**
+ * Matches every line the user has not confirmed against today's catalog again, judges every line, and records a
+ * check whose `changes` name the lines whose status moved since the check before. Checks of one BOM take turns.
+ * The alerts call this with trigger 'change' when a part a BOM uses changes.
+ */
+export async function recheckBom(db: Db, bomId: string, options: RecheckOptions): Promise<BomCheckDto> {
+  const { checkId } = await recheck(db, bomId, options);
   const rows: CheckRow[] = await db.query(`${CHECK_SELECT} WHERE c.id = $1`, [checkId]);
   return presentCheck(rows[0]!);
 }
 
 /** The Check again button: the owner (or whoever may change the BOM) reruns it and gets the detail back. */
 export async function checkBom(db: DataSource, ability: AppAbility, id: string, actorId: string): Promise<BomDetailDto> {
-  await bomFor(db, ability, id, 'update');
-  await recheckBom(db, id, { trigger: 'manual', actorId });
-  return getBomDetail(db, ability, id);
+  const { row, lines, summary } = await recheck(db, id, { trigger: 'manual', actorId }, ability);
+  return detailOf(row, lines, summary, await loadChecks(db, id));
 }
 
 // ---------------------------------------------------------------------------------------------------------------
