@@ -1,5 +1,5 @@
 import type { EquivalentDto } from '@understudy/shared-types';
-import { Badge } from '../../../components/ui';
+import { Badge } from './badge';
 
 /** An editor's ruling on the pair, as everyone sees it; the note rides along as a tooltip. */
 export function EquivalentFlag({ equivalent }: { equivalent: Pick<EquivalentDto, 'status' | 'use' | 'note'> }) {

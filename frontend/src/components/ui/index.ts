@@ -14,3 +14,5 @@ export * from './states';
 export * from './part-badges';
 export * from './pinout-diagram';
 export * from './cadmium-caution';
+export * from './score-bar';
+export * from './equivalent-flag';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatScore } from './display';
+import { formatScore } from './score-bar';
 
 describe('formatScore', () => {
   it('shows whole points', () => {

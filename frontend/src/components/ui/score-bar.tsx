@@ -1,5 +1,10 @@
-import { cx } from '../../../components/ui';
-import { formatScore } from '../lib/display';
+import { cx } from './cx';
+
+/** Whole points, except that only a perfect match reads 100: 99.9 stays 99.9, so a small loss is never hidden. */
+export function formatScore(score: number): string {
+  const whole = Math.round(score);
+  return whole === 100 && score < 100 ? (Math.floor(score * 10) / 10).toFixed(1) : String(whole);
+}
 
 /** The score out of 100 as a number with a bar behind it; the number is what is read out. */
 export function ScoreBar({ score, className }: { score: number; className?: string }) {

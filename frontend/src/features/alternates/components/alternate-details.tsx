@@ -1,7 +1,8 @@
 import type { BreakdownLine, CandidatePart, RankedAlternate } from '@understudy/shared-types';
 import { PinoutDiagram, cx } from '../../../components/ui';
 import { effectivePins, packageLabel } from '../../../lib/part-display';
-import { formatPoints, formatScore } from '../lib/display';
+import { formatScore } from '../../../components/ui';
+import { formatPoints } from '../lib/display';
 import { PinoutClassBadge } from './pinout-class-badge';
 
 /** Where a candidate's points went, criterion by criterion, against the original. */

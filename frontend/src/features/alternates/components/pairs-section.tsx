@@ -1,11 +1,10 @@
 import { createColumnHelper, type ColumnDef } from '@tanstack/react-table';
 import { formatQuantity, type CandidatePart, type RankedPair, type RankedPairs } from '@understudy/shared-types';
 import { useId, type ReactNode } from 'react';
-import { Card, EmptyState, LifecycleBadge, RohsBadge, SectionHeading } from '../../../components/ui';
+import { Card, EmptyState, LifecycleBadge, RohsBadge, ScoreBar, SectionHeading } from '../../../components/ui';
 import { BreakdownTable } from './alternate-details';
 import { ExpandableTable, type ColumnMeta } from './expandable-table';
 import { PartCell } from './part-cell';
-import { ScoreBar } from './score-bar';
 
 const ohms = (v: number) => (Number.isFinite(v) ? formatQuantity(v, 'Ω', { digits: 2 }) : 'open circuit');
 // Light is read in plain lux (1600 lx), as meters and datasheets give it, not klx.

@@ -1,9 +1,8 @@
 import type { CandidatePart, EquivalentDto, EquivalentStatus } from '@understudy/shared-types';
 import { useState, type ReactNode } from 'react';
-import { ConfirmDialog, cx } from '../../../components/ui';
+import { ConfirmDialog, cx, EquivalentFlag } from '../../../components/ui';
 import { Can } from '../../../lib/ability';
 import { useDeleteEquivalent } from '../api/delete-equivalent';
-import { EquivalentFlag } from './equivalent-flag';
 import { RulingDialog } from './ruling-dialog';
 
 /** A small text button that fits a table cell. */

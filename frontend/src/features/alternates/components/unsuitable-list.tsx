@@ -1,9 +1,8 @@
 import type { EquivalentDto, Unsuitable } from '@understudy/shared-types';
 import { useId, useState } from 'react';
 import { Link } from 'react-router';
-import { Button, CadmiumMark, Card, LifecycleBadge, SectionHeading } from '../../../components/ui';
+import { Button, CadmiumMark, Card, EquivalentFlag, LifecycleBadge, SectionHeading } from '../../../components/ui';
 import { containsCadmium } from '../../../lib/part-display';
-import { EquivalentFlag } from './equivalent-flag';
 
 const SHOWN_AT_FIRST = 8;
 

@@ -29,11 +29,6 @@ export function formatNeedMargin(need: Pick<DerivedNeed, 'key' | 'unit'> | undef
   return formatMargin(margin);
 }
 
-/** Whole points, except that only a perfect match reads 100: 99.9 stays 99.9, so a small loss is never hidden. */
-export function formatScore(score: number): string {
-  const whole = Math.round(score);
-  return whole === 100 && score < 100 ? (Math.floor(score * 10) / 10).toFixed(1) : String(whole);
-}
 
 /** The figures a designer reads first for a part of this family: its default catalog columns. */
 export function keyFacts(part: CandidatePart): Array<{ def: ParameterDefinition; text: string; qualifier?: string }> {

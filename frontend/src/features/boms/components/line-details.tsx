@@ -1,12 +1,10 @@
 import { BOM_FIELD_LABELS, BOM_LIMITS, type BomLineDto, type BomPart, type RankedAlternate } from '@understudy/shared-types';
 import { useId, useState, type ReactNode } from 'react';
 import { Link } from 'react-router';
-import { Button, CadmiumCaution, CadmiumMark, LifecycleBadge, RohsBadge, Spinner, cx } from '../../../components/ui';
+import { Button, CadmiumCaution, CadmiumMark, cx, EquivalentFlag, LifecycleBadge, RohsBadge, ScoreBar, Spinner } from '../../../components/ui';
 import { useDebouncedValue } from '../../../hooks/use-debounced-value';
 import { formatDateTime } from '../../../lib/format';
 import { containsCadmium } from '../../../lib/part-display';
-import { EquivalentFlag } from '../../alternates/components/equivalent-flag';
-import { ScoreBar } from '../../alternates/components/score-bar';
 import { useLineOptions } from '../api/get-line-options';
 import { usePartSearch } from '../api/search-parts';
 import { useUpdateBomLine } from '../api/update-bom-line';
