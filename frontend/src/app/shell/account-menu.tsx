@@ -42,7 +42,7 @@ export function AccountMenu({ user }: { user: CurrentUser }) {
         <span aria-hidden="true" className="flex size-8 items-center justify-center rounded-full bg-copper text-xs font-bold text-card">
           {initials(user.name)}
         </span>
-        <span className="hidden max-w-40 truncate sm:inline">{user.name}</span>
+        <span className="hidden max-w-40 truncate 2xl:inline">{user.name}</span>
         <span className="sr-only">Account menu</span>
         <svg aria-hidden="true" viewBox="0 0 12 12" className={open ? 'size-3 rotate-180' : 'size-3'}>
           <path d="M2.5 4.5 6 8l3.5-3.5" fill="none" stroke="currentColor" strokeWidth="1.6" strokeLinecap="round" strokeLinejoin="round" />

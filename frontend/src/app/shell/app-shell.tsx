@@ -18,13 +18,13 @@ export function AppShell({ user, children }: { user: CurrentUser; children: Reac
         Skip to content
       </a>
       <header className="sticky top-0 z-10 border-b border-rule bg-paper/90 backdrop-blur supports-[backdrop-filter]:bg-paper/75 print:hidden">
-        <div className="mx-auto flex h-16 max-w-6xl items-center gap-4 px-4 sm:gap-8 sm:px-6">
+        <div className="mx-auto flex h-16 max-w-6xl items-center gap-3 px-4 sm:gap-4 sm:px-6 lg:gap-5">
           <Link to="/" className="shrink-0 rounded-md" aria-label="Understudy home">
             <Wordmark compact />
           </Link>
           <MainNav className="min-w-0 flex-1 overflow-x-auto" />
           <Can I="read" a="Part">
-            <QuickFind className="w-36 shrink-0 sm:w-56" />
+            <QuickFind className="w-36 shrink-0 sm:w-44 xl:w-52" />
           </Can>
           <NoticesBell />
           <AccountMenu user={user} />

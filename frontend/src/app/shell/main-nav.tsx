@@ -35,7 +35,7 @@ export function MainNav({ className }: { className?: string }) {
               end={item.end}
               className={({ isActive }) =>
                 cx(
-                  'relative inline-flex h-9 items-center rounded-md px-3 text-sm font-semibold transition-colors',
+                  'relative inline-flex h-9 items-center rounded-md px-2.5 text-sm font-semibold whitespace-nowrap transition-colors',
                   isActive
                     ? 'bg-ink text-paper'
                     : 'text-ink-soft hover:bg-paper-deep hover:text-ink',
