@@ -1,5 +1,4 @@
 import { isCadmiumCell, type BomCheckDto, type BomDelimiter, type BomDto, type BomMapping, type BomPart, type BomSummary, type FamilyKey, type Lifecycle, type PersonRef, type RohsStatus } from '@understudy/shared-types';
-import { summaryText } from './bom-status';
 
 export interface PartRow {
   id: string;
@@ -56,9 +55,10 @@ export const BOM_SELECT = `SELECT b.*, u.name AS owner_name,
                 FROM bom_shares s JOIN users su ON su.id = s.user_id WHERE s.bom_id = b.id), '[]'::jsonb) AS shared_with
   FROM boms b JOIN users u ON u.id = b.owner_id`;
 
+/** For a BOM never judged yet (written by other means than a save): no counts, and it says so. */
 export function emptySummary(lines: number): BomSummary {
   const counts = { lines, ok: 0, obsolete: 0, nrnd: 0, lastTimeBuy: 0, nonCompliant: 0, cadmium: 0, unmatched: 0, toConfirm: 0, withProblems: 0, replaced: 0 };
-  return { ...counts, text: summaryText(counts) };
+  return { ...counts, text: `${lines.toLocaleString('en')} ${lines === 1 ? 'line' : 'lines'}, not checked yet` };
 }
 
 const iso = (d: Date | string) => new Date(d).toISOString();
