@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { decideExact, keyVariants, makerKey, sameMaker, type CatalogHit } from './bom-match';
-import { TrigramIndex, trigramSimilarity, trigramsOf } from './bom-trigrams';
+import { editDistance, likeness, neighbourSwaps, TrigramIndex, trigramSimilarity, trigramsOf } from './bom-trigrams';
 
 const hit = (partNumber: string, manufacturer: string, id = `${manufacturer}:${partNumber}`): CatalogHit => ({
   id,
@@ -106,5 +106,24 @@ describe('trigram similarity', () => {
         .slice(0, 3);
       expect(index.nearest(query, 3, 0.38)).toEqual(brute);
     }
+  });
+});
+
+describe('edits', () => {
+  it('counts insertions, deletions, substitutions and neighbour swaps (optimal string alignment)', () => {
+    // Source: "Levenshtein distance" (Wikipedia): kitten → sitting is 3 edits.
+    expect(editDistance('kitten', 'sitting')).toBe(3);
+    // Source: "Damerau–Levenshtein distance" (Wikipedia): CA → ABC is 3 under optimal string alignment (2 unrestricted).
+    expect(editDistance('ca', 'abc')).toBe(3);
+    expect(editDistance('hv4850', 'hv4580')).toBe(1);
+    expect(editDistance('', 'abc')).toBe(3);
+  });
+
+  it('rates a swap of neighbours as nearly the same number, which trigrams alone do not', () => {
+    expect(trigramSimilarity('hv4850', 'hv4580')).toBeCloseTo(3 / 11, 10);
+    expect(likeness('hv4850', 'hv4580')).toBeCloseTo(5 / 6, 10);
+    expect(likeness('cv2207', 'cv2207')).toBe(1);
+    expect(neighbourSwaps('hv4850')).toEqual(['vh4850', 'h4v850', 'hv8450', 'hv4580', 'hv4805']);
+    expect(neighbourSwaps('aab')).toEqual(['aba']);
   });
 });

@@ -4,7 +4,7 @@ import type { DataSource, EntityManager } from 'typeorm';
 import { BOM_LIMITS } from '@understudy/shared-types';
 import type { StoredCandidate } from '../../entities';
 import { CANDIDATE_SIMILARITY, decideExact, decideFuzzy, keyVariants, type CatalogHit, type MatchResult } from './bom-match';
-import { TrigramIndex } from './bom-trigrams';
+import { likeness, neighbourSwaps, TrigramIndex } from './bom-trigrams';
 
 type Db = DataSource | EntityManager;
 
@@ -30,25 +30,40 @@ export async function matchLines(db: Db, lines: readonly MatchInput[]): Promise<
     return decideExact(line.partNumber, line.manufacturer, variants[i]!, hitsByKey);
   });
 
-  // The similarity search, on the key as written and on the key with its suffixes set aside.
+  // The similarity search, on the key as written and on the key with its suffixes set aside; and, since trigrams
+  // miss two swapped neighbours, every such swap of the key looked up exactly.
   const searchKeys = new Map<number, string[]>();
+  const swapKeys = new Map<number, string[]>();
   results.forEach((r, i) => {
     if (r) return;
     const vs = variants[i]!.filter((v) => v.key.length >= 3 && !v.removed.some((x) => x.kind === 'package-letter'));
     const deepest = vs[vs.length - 1];
-    searchKeys.set(i, [...new Set([vs[0]?.key, deepest?.key].filter((k): k is string => !!k))]);
+    const searched = [...new Set([vs[0]?.key, deepest?.key].filter((k): k is string => !!k))];
+    searchKeys.set(i, searched);
+    swapKeys.set(i, searched.filter((k) => k.length >= MIN_SWAP_KEY).flatMap(neighbourSwaps));
   });
-  const near = await nearestParts(db, [...new Set([...searchKeys.values()].flat())]);
+  const [near, swapped] = await Promise.all([
+    nearestParts(db, [...new Set([...searchKeys.values()].flat())]),
+    exactHits(db, [...new Set([...swapKeys.values()].flat())]),
+  ]);
   return results.map((r, i) => {
     if (r) return r;
+    const searched = searchKeys.get(i) ?? [];
     const byPart = new Map<string, StoredCandidate>();
-    for (const key of searchKeys.get(i) ?? []) {
-      for (const c of near.get(key) ?? []) if ((byPart.get(c.partId)?.similarity ?? -1) < c.similarity) byPart.set(c.partId, c);
-    }
+    const offer = (partId: string, key: string) => {
+      const similarity = Math.round(Math.max(...searched.map((q) => likeness(q, key))) * 1000) / 1000;
+      if ((byPart.get(partId)?.similarity ?? -1) < similarity) byPart.set(partId, { partId, similarity });
+    };
+    for (const key of searched) for (const c of near.get(key) ?? []) offer(c.partId, c.key);
+    for (const key of swapKeys.get(i) ?? []) for (const h of swapped.get(key) ?? []) offer(h.id, h.key);
+    // Best first; equally alike, in the order found (the similarity search's order: by key, then id).
     const ranked = [...byPart.values()].sort((a, b) => b.similarity - a.similarity).slice(0, BOM_LIMITS.candidatesPerLine);
     return decideFuzzy(ranked);
   });
 }
+
+/** Swaps are tried on keys this long or longer; in a shorter one a swap is as likely another real number. */
+const MIN_SWAP_KEY = 4;
 
 interface HitRow {
   id: string;
@@ -81,24 +96,29 @@ async function exactHits(db: Db, keys: string[]): Promise<Map<string, CatalogHit
  * The closest catalog parts to each key (similarity ≥ CANDIDATE_SIMILARITY, best first, ties by key and id),
  * at most candidatesPerLine per key.
  */
-export async function nearestParts(db: Db, keys: string[], options: { inMemory?: boolean } = {}): Promise<Map<string, StoredCandidate[]>> {
-  const out = new Map<string, StoredCandidate[]>();
+export interface NearPart extends StoredCandidate {
+  /** The part's own key. */
+  key: string;
+}
+
+export async function nearestParts(db: Db, keys: string[], options: { inMemory?: boolean } = {}): Promise<Map<string, NearPart[]>> {
+  const out = new Map<string, NearPart[]>();
   if (!keys.length) return out;
   const limit = BOM_LIMITS.candidatesPerLine;
   const inMemory = options.inMemory ?? keys.length > SQL_SIMILARITY_MAX;
   if (!inMemory) {
-    const rows: { key: string; id: string; sim: number }[] = await db.query(
-      `SELECT q.key, c.id, c.sim
+    const rows: { key: string; id: string; part_key: string; sim: number }[] = await db.query(
+      `SELECT q.key, c.id, c.part_key, c.sim
          FROM unnest($1::text[]) AS q(key)
          CROSS JOIN LATERAL (
-           SELECT p.id, similarity(p.part_number_key, q.key) AS sim
+           SELECT p.id, p.part_number_key AS part_key, similarity(p.part_number_key, q.key) AS sim
              FROM parts p
             WHERE NOT p.archived AND p.part_number_key % q.key AND similarity(p.part_number_key, q.key) >= $2
             ORDER BY sim DESC, p.part_number_key, p.id
             LIMIT $3) c`,
       [keys, CANDIDATE_SIMILARITY, limit],
     );
-    for (const r of rows) out.set(r.key, [...(out.get(r.key) ?? []), { partId: r.id, similarity: Number(r.sim) }]);
+    for (const r of rows) out.set(r.key, [...(out.get(r.key) ?? []), { partId: r.id, key: r.part_key, similarity: Number(r.sim) }]);
     return out;
   }
 
@@ -110,7 +130,7 @@ export async function nearestParts(db: Db, keys: string[], options: { inMemory?:
   const hits = await exactHits(db, wanted);
   for (const [key, near] of nearKeys) {
     // A key held by several parts (several makers) gives each of them, in id order, as the SQL above does.
-    const parts = near.flatMap((n) => [...(hits.get(n.key) ?? [])].sort((a, b) => (a.id < b.id ? -1 : 1)).map((h) => ({ partId: h.id, similarity: n.similarity })));
+    const parts = near.flatMap((n) => [...(hits.get(n.key) ?? [])].sort((a, b) => (a.id < b.id ? -1 : 1)).map((h) => ({ partId: h.id, key: h.key, similarity: n.similarity })));
     if (parts.length) out.set(key, parts.slice(0, limit));
   }
   return out;
