@@ -2,7 +2,7 @@
 // every problem found on a line kept on that line (never dropped). Pure.
 import { BOM_FIELD_LABELS, type BomDelimiter, type BomField, type BomLineProblem, type BomMapping } from '@understudy/shared-types';
 import { ValidationError } from '../../middleware/validate';
-import { assertLineCount, BomRejectedError, columnNames, normaliseText, readRows, type Record_ } from './bom-read';
+import { assertLineCount, BomRejectedError, columnNames, normaliseText, readRows, type ReadRecord } from './bom-read';
 
 export interface ParsedLine {
   row: number;
@@ -147,7 +147,7 @@ export function parseBom(raw: string, { delimiter, hasHeader, mapping }: ParseOp
   return { columns: columnNames(hasHeader ? records[0]!.cells : null, columnCount), lines };
 }
 
-function parseLine(record: Record_, mapping: BomMapping, delimiter: BomDelimiter): ParsedLine {
+function parseLine(record: ReadRecord, mapping: BomMapping, delimiter: BomDelimiter): ParsedLine {
   const problems: BomLineProblem[] = [];
   const partNumber = cell(record.cells, mapping.partNumber).replace(/\s+/g, ' ');
   if (!partNumber) problems.push({ field: 'partNumber', message: 'No part number' });

@@ -1,11 +1,11 @@
 import iconv from 'iconv-lite';
 import { describe, expect, it } from 'vitest';
 import { BOM_LIMITS } from '@understudy/shared-types';
-import { buildPreview, decodeBytes, guessDelimiter, guessHasHeader, guessMapping, readRows, type Record_ } from './bom-read';
+import { buildPreview, decodeBytes, guessDelimiter, guessHasHeader, guessMapping, readRows, type ReadRecord } from './bom-read';
 
 const bytes = (...b: number[]) => Uint8Array.from(b);
 const utf8 = (s: string) => new Uint8Array(Buffer.from(s, 'utf8'));
-const records = (rows: string[][]): Record_[] => rows.map((cells, i) => ({ row: i + 1, cells }));
+const records = (rows: string[][]): ReadRecord[] => rows.map((cells, i) => ({ row: i + 1, cells }));
 
 function rejection(fn: () => unknown): { status: number; code: string; reason: string; rows: unknown[]; message: string } {
   try {

@@ -125,7 +125,7 @@ export function normaliseText(text: string): string {
 // ---------------------------------------------------------------------------------------------------------------
 // Text → rows
 
-export interface Record_ {
+export interface ReadRecord {
   /** The row as a spreadsheet numbers it: 1 for the first record, blank ones included. */
   row: number;
   cells: string[];
@@ -133,7 +133,7 @@ export interface Record_ {
 
 export interface ReadRows {
   /** Non-blank records in order; the header, if any, is the first. */
-  records: Record_[];
+  records: ReadRecord[];
   columnCount: number;
 }
 
@@ -161,7 +161,7 @@ export function readRows(text: string, delimiter: BomDelimiter, hasHeaderForCoun
       { row, message: 'A quote opens and never closes.' },
     ]);
   }
-  const records: Record_[] = [];
+  const records: ReadRecord[] = [];
   let columnCount = 0;
   parsed.data.forEach((cells, i) => {
     if (isBlank(cells)) return;
@@ -251,7 +251,7 @@ const isNumberLike = (cell: string) => /^[+-]?\d+(?:[.,]\d+)?$/.test(cell.trim()
  * Whether the first row is a header: it has no number-like cells and either names a field in known words, or
  * holds only words above a column of numbers.
  */
-export function guessHasHeader(records: readonly Record_[]): boolean {
+export function guessHasHeader(records: readonly ReadRecord[]): boolean {
   const first = records[0]?.cells ?? [];
   if (first.some(isNumberLike)) return false;
   if (first.some((cell) => BOM_FIELDS.some((f) => headerScore(cell, f) > 0))) return true;
