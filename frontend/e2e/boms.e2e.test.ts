@@ -79,7 +79,9 @@ describe(`BOM check against ${BASE_URL}`, () => {
       await risks.waitFor();
       const riskText = (await risks.textContent()) ?? '';
       expect(riskText).toMatch(/8\s*Obsolete/i);
-      expect(riskText).toMatch(/3\s*Not in catalog/i);
+      expect(riskText).toMatch(/2\s*Not in catalog/i);
+      // The typo (HV4850 for HV4580, two digits swapped) is offered its likely part to confirm, not dropped.
+      expect(riskText).toMatch(/1\s*To confirm/i);
       const lines = page.getByRole('table', { name: `Lines of ${name}` });
       const rows = lines.locator('tbody tr[data-line-id]');
       await rows.first().waitFor();
@@ -106,6 +108,13 @@ describe(`BOM check against ${BASE_URL}`, () => {
       expect((await picked).status()).toBe(200);
       await expect.poll(async () => rows.filter({ hasText: 'hv4558' }).textContent()).toContain('HV4580');
       await screenshot(page, 'bom-replacement');
+
+      // The typo's likely part, confirmed by the purchaser: the line is matched and judged like any other.
+      await rows.filter({ hasText: 'HV4850' }).getByRole('button', { name: 'Details for row 22, HV4850' }).click();
+      const close = page.getByRole('list', { name: 'Close matches for row 22' });
+      await close.getByRole('button', { name: 'This one (HV4580)' }).click();
+      await expect.poll(async () => rows.filter({ hasText: 'HV4850' }).textContent()).toMatch(/confirmed/i);
+      expect(await rows.filter({ hasText: 'HV4850' }).locator('td[data-column="status"]').textContent()).toBe('OK');
 
       // Export: the original columns untouched, then status, replacement and note.
       const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Export CSV' }).click()]);
