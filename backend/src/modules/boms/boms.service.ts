@@ -175,10 +175,11 @@ async function loadCatalog(db: Db, lines: readonly StoredLine[]): Promise<Catalo
   await loadParts(db, [...rulings.values()].flat().map((e) => e.equivalentId), parts, archived);
   const equivalents = new Map<string, ApprovedEquivalentRef[]>();
   for (const [partId, list] of rulings) {
-    // An archived part is no longer offered, even where an editor once approved it.
+    // An archived or obsolete part is no longer offered, even where an editor once approved it: the ruling is
+    // symmetric, so an active part's approved equivalent may be the very obsolete part it replaced.
     const refs = list.flatMap((e) => {
       const part = parts.get(e.equivalentId);
-      return part && !archived.has(part.id) ? [{ part, use: e.use, note: e.note }] : [];
+      return part && !archived.has(part.id) && part.lifecycle !== 'obsolete' ? [{ part, use: e.use, note: e.note }] : [];
     });
     if (refs.length) equivalents.set(partId, refs);
   }

@@ -161,6 +161,14 @@ describe('BOM check', () => {
     expect(byRow(bom, 11).match).toMatchObject({ kind: 'exact', part: { id: ids['QX-100'] } });
   });
 
+  it('never offers an obsolete part as a stand-in, though the approval runs both ways', async () => {
+    // CV2208 is approved for CV2207; seen from CV2208, that ruling names the obsolete CV2207.
+    // Another person's BOM, so the owner's remembered mapping stays as the later tests expect.
+    const { agent: purchaser } = await ctx.agentFor('viewer');
+    const active = await create(purchaser, { name: 'Active only', text: 'Part Number;Qty\nCV2208;1', mapping: { partNumber: 0, quantity: 1 } });
+    expect(active.lines[0]).toMatchObject({ status: 'ok', approvedEquivalents: [] });
+  });
+
   it('judges each line: status, risk in words, approved equivalents, and the summary', async () => {
     expect(byRow(bom, 2)).toMatchObject({ status: 'at-risk', risk: 'Obsolete — 1 approved equivalent' });
     expect(byRow(bom, 2).approvedEquivalents).toEqual([expect.objectContaining({ part: expect.objectContaining({ id: ids.CV2208 }), use: 'tone stage' })]);
