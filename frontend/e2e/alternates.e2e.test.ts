@@ -74,7 +74,7 @@ describe(`alternates against ${BASE_URL}`, () => {
 
       // Why the best one scores what it does.
       const best = before[0]!;
-      const toggle = page.getByRole('button', { name: `Details for ${best}` });
+      const toggle = page.getByRole('button', { name: `Details for ${best}`, exact: true });
       await toggle.click();
       expect(await toggle.getAttribute('aria-expanded')).toBe('true');
       const breakdown = page.getByRole('table', { name: new RegExp(`^Why ${escapeRegExp(best)} scores \\d+`) });
@@ -157,7 +157,7 @@ describe(`alternates against ${BASE_URL}`, () => {
       for (const margin of slewMargins) expect(margin).toMatch(/\+\d+ %, meets it/);
 
       const top = (await positionTable.locator('tbody tr[data-row-id] td[data-column="part"] a').first().textContent())!.trim();
-      await positionTable.getByRole('button', { name: `Details for ${top}` }).click();
+      await positionTable.getByRole('button', { name: `Details for ${top}`, exact: true }).click();
       const margins = page.getByRole('table', { name: `How ${top} meets each requirement` });
       await margins.waitFor();
       const slewLine = margins.locator('tr[data-need="slewRate"]');
