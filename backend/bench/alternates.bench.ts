@@ -6,32 +6,16 @@
  * Target: API p95 ≤ 150 ms.
  */
 import { AlternatesQuerySchema, PositionRequirementsSchema, type FamilyKey, type PositionRequirementsInput } from '@understudy/shared-types';
-import { loadConfig } from '../src/config';
-import { createDataSource } from '../src/data-source';
 import { alternatesSqlOnly, positionSqlOnly } from '../src/modules/alternates/alternates.service';
 import { loadCandidate } from '../src/modules/alternates/candidate-parts';
 import { findPairs, shortlistPairParts } from '../src/modules/alternates/pairs-shortlist';
 import { startApiAsViewer, timeRuns } from './api-harness';
-import { loadSyntheticCatalog } from './load-synthetic';
+import { log, openBenchCatalog } from './bench-catalog';
 
-const N = Number(process.env.BENCH_PARTS ?? 100_000);
 const ITERATIONS = Number(process.env.BENCH_ITERATIONS ?? 40);
 const TARGET_P95 = 150;
-const log = (line: string) => console.log(line);
 
-const config = loadConfig({ ...process.env, NODE_ENV: 'test' });
-const db = createDataSource(config.databaseUrl);
-await db.initialize();
-
-const [{ count }] = await db.query(`SELECT count(*)::int AS count FROM parts`);
-if (count !== N || process.env.BENCH_RELOAD === '1') {
-  log(`Loading ${N.toLocaleString('en')} synthetic parts into the scratch database…`);
-  await loadSyntheticCatalog(db, N, log);
-} else {
-  log(`Reusing the scratch database's ${count.toLocaleString('en')} synthetic parts (BENCH_RELOAD=1 reloads).`);
-}
-// The migrations may have added indexes since the catalog was loaded; fresh statistics keep plans honest.
-await db.query('ANALYZE parts');
+const { db } = await openBenchCatalog();
 
 /** A fixed, typical original of a family: the 500th active part in part-number order matching `where`. */
 async function original(family: FamilyKey, where = 'true'): Promise<{ id: string; partNumber: string }> {

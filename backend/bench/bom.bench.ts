@@ -6,30 +6,15 @@
  * Target: save + check p95 under 5 s.
  */
 import { BomDetailDtoSchema, type BomCreateBody, type MatchKind } from '@understudy/shared-types';
-import { loadConfig } from '../src/config';
-import { createDataSource } from '../src/data-source';
 import { percentile, startApiAsViewer } from './api-harness';
-import { loadSyntheticCatalog } from './load-synthetic';
+import { log, openBenchCatalog } from './bench-catalog';
 
-const N = Number(process.env.BENCH_PARTS ?? 100_000);
 const ITERATIONS = Number(process.env.BENCH_ITERATIONS ?? 8);
 const WARM_UP = 2;
 const LINES = 10_000;
 const TARGET_MS = 5_000;
-const log = (line: string) => console.log(line);
 
-const config = loadConfig({ ...process.env, NODE_ENV: 'test' });
-const db = createDataSource(config.databaseUrl);
-await db.initialize();
-
-const [{ count }] = await db.query(`SELECT count(*)::int AS count FROM parts`);
-if (count !== N || process.env.BENCH_RELOAD === '1') {
-  log(`Loading ${N.toLocaleString('en')} synthetic parts into the scratch database…`);
-  await loadSyntheticCatalog(db, N, log);
-} else {
-  log(`Reusing the scratch database's ${count.toLocaleString('en')} synthetic parts (BENCH_RELOAD=1 reloads).`);
-}
-await db.query('ANALYZE parts');
+const { db } = await openBenchCatalog();
 
 /** mulberry32, as the catalog generator uses: the same BOM on every run. */
 function rng(seed: number): () => number {

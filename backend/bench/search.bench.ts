@@ -4,28 +4,14 @@
  * Targets on a 2-core machine: API p95 ≤ 50 ms, ratio ≤ 2.
  */
 import { PartListQuerySchema } from '@understudy/shared-types';
-import { loadConfig } from '../src/config';
-import { createDataSource } from '../src/data-source';
 import { parseFilters } from '../src/modules/parts/part-filters';
 import { buildSearchSql, matchingManufacturers } from '../src/modules/parts/parts-search.service';
 import { startApiAsViewer, timeRuns } from './api-harness';
-import { loadSyntheticCatalog } from './load-synthetic';
+import { log, openBenchCatalog } from './bench-catalog';
 
-const N = Number(process.env.BENCH_PARTS ?? 100_000);
 const ITERATIONS = Number(process.env.BENCH_ITERATIONS ?? 60);
-const log = (line: string) => console.log(line);
 
-const config = loadConfig({ ...process.env, NODE_ENV: 'test' });
-const db = createDataSource(config.databaseUrl);
-await db.initialize();
-
-const [{ count }] = await db.query(`SELECT count(*)::int AS count FROM parts`);
-if (count !== N || process.env.BENCH_RELOAD === '1') {
-  log(`Loading ${N.toLocaleString('en')} synthetic parts into the scratch database…`);
-  await loadSyntheticCatalog(db, N, log);
-} else {
-  log(`Reusing the scratch database's ${count.toLocaleString('en')} synthetic parts (BENCH_RELOAD=1 reloads).`);
-}
+const { db } = await openBenchCatalog();
 
 // A real part number from the data, with two characters swapped, for the typo query.
 const [{ part_number: samplePn }] = await db.query(`SELECT part_number FROM parts WHERE family = 'op-amp' ORDER BY part_number_key OFFSET 777 LIMIT 1`);
