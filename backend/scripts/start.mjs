@@ -69,7 +69,7 @@ await main(async () => {
     ? `Mail goes to your SMTP server (${process.env.SMTP_HOST}); the outbox page is off.`
     : nodeEnv === 'production'
       ? 'The outbox page is off in production.'
-      : `Sent mail (invitations, password resets): ${cyan(`${appUrl}/admin/outbox`)} (admin only)`;
+      : `Sent mail (invitations, password resets, BOM alerts): ${cyan(`${appUrl}/admin/outbox`)} (admin only)`;
   console.log(
     [
       '',
