@@ -36,7 +36,7 @@ export function ColumnMapping({
               const choice = choices[c.index] ?? 'ignore';
               const note = choiceNote(preview, c.index, choice);
               return (
-                <th key={c.index} scope="col" className="min-w-40 px-3 py-2.5 font-normal">
+                <th key={c.index} scope="col" className="min-w-52 px-3 py-2.5 font-normal">
                   <InlineSelect
                     aria-label={`${columnName(preview, c.index)} holds`}
                     value={choice}
