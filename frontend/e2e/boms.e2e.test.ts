@@ -160,4 +160,41 @@ describe(`BOM check against ${BASE_URL}`, () => {
       await editor.context.close();
     }
   }, 150_000);
+
+  it('a purchaser uploads a semicolon CSV saved in Windows-1252 with French headers, and it reads and checks alike', async () => {
+    // A spreadsheet in a French locale saves CSV with semicolons in the legacy Windows code page.
+    const rows = [
+      'Repère;Qté;Fabricant;Référence fabricant;Désignation',
+      'U1;2;Halvard Semiconductor;hv4558;Double ampli op, étages de phase',
+      'VR1;1;Tessaly Components;TS16-B10K;Potentiomètre de profondeur',
+      'LDR1;1;Brightwater Optics;BW-LDR-10K-4;Cellule CdS, trémolo',
+      'R1-R4;4;;RC0805-10K;Résistance 10 k',
+    ];
+    const { context, page } = await newSession(browser);
+    try {
+      await signIn(page, PURCHASER);
+      await page.goto('/boms/new');
+      await page.locator('input[type="file"]').setInputFiles({
+        name: 'trémolo-fr.csv',
+        mimeType: 'text/csv',
+        buffer: Buffer.from(`${rows.join('\r\n')}\r\n`, 'latin1'),
+      });
+      await expect.poll(async () => page.getByTestId('read-as').textContent()).toMatch(/Read 4 lines as Windows-1252, separated by semicolon/);
+      // The accented headers came through intact and were recognised.
+      expect(await page.getByLabel('Column 4 (Référence fabricant) holds').inputValue()).toBe('partNumber');
+      expect(await page.getByLabel('Column 2 (Qté) holds').inputValue()).toBe('quantity');
+      expect(await page.getByLabel('Name', { exact: true }).inputValue()).toBe('trémolo-fr');
+      await page.getByRole('button', { name: 'Check and save' }).click();
+      await page.getByRole('heading', { level: 1, name: 'trémolo-fr' }).waitFor();
+      const lines = page.getByRole('table', { name: 'Lines of trémolo-fr' });
+      const status = (text: string) => lines.locator('tbody tr[data-line-id]').filter({ hasText: text }).locator('td[data-column="status"]').textContent();
+      expect(await status('hv4558')).toBe('At risk');
+      expect(await status('TS16-B10K')).toBe('OK');
+      expect(await status('RC0805-10K')).toBe('Not in catalog');
+      expect(await lines.locator('tbody tr[data-line-id]').filter({ hasText: 'RC0805-10K' }).textContent()).toContain('R1, R2, R3, R4');
+      await screenshot(page, 'bom-uploaded-1252');
+    } finally {
+      await context.close();
+    }
+  });
 });

@@ -296,7 +296,7 @@ export function BomLinesTable({
             Lines {first.toLocaleString()}–{last.toLocaleString()} of {total.toLocaleString()}
           </p>
           <div className="flex items-center gap-2">
-            <div className="w-32">
+            <div className="w-36">
               <InlineSelect
                 aria-label="Lines per page"
                 value={String(pageSize)}
