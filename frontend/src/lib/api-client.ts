@@ -45,6 +45,8 @@ interface RequestOptions<S extends z.ZodType | undefined> {
   body?: unknown;
   /** A body sent as is (a file's text), with its own content type, instead of JSON. */
   rawBody?: { text: string; contentType: string };
+  /** A multipart form (a file upload); the browser sets its content type and boundary. */
+  form?: FormData;
   query?: Record<string, string | undefined>;
   /** The shared schema the response must satisfy; omit for empty (204) responses. */
   schema?: S;
@@ -60,6 +62,7 @@ const FALLBACK_MESSAGES: Record<number, string> = {
   404: 'That could not be found.',
   409: 'That conflicts with the current state. Refresh and try again.',
   410: 'That link has expired.',
+  413: 'The file is too large to send.',
   429: 'Too many attempts. Wait a moment and try again.',
 };
 
@@ -97,7 +100,7 @@ export async function apiRequest<S extends z.ZodType | undefined = undefined>(
   path: string,
   options: RequestOptions<S> = {},
 ): Promise<Result<S>> {
-  const { method = 'GET', body, rawBody, query, schema, signal } = options;
+  const { method = 'GET', body, rawBody, form, query, schema, signal } = options;
   const headers: Record<string, string> = { Accept: 'application/json' };
   if (rawBody) headers['Content-Type'] = rawBody.contentType;
   else if (body !== undefined) headers['Content-Type'] = 'application/json';
@@ -108,7 +111,7 @@ export async function apiRequest<S extends z.ZodType | undefined = undefined>(
       method,
       headers,
       credentials: 'same-origin',
-      body: rawBody ? rawBody.text : body === undefined ? undefined : JSON.stringify(body),
+      body: form ?? (rawBody ? rawBody.text : body === undefined ? undefined : JSON.stringify(body)),
       signal,
     });
   } catch (cause) {
