@@ -83,7 +83,7 @@ describe(`BOM check against ${BASE_URL}`, () => {
       // The typo (HV4850 for HV4580, two digits swapped) is offered its likely part to confirm, not dropped.
       expect(riskText).toMatch(/1\s*To confirm/i);
       const lines = page.getByRole('table', { name: `Lines of ${name}` });
-      const rows = lines.locator('tbody tr[data-line-id]');
+      const rows = lines.locator('tbody tr[data-row-id]');
       await rows.first().waitFor();
       expect(await rows.count()).toBe(30);
       for (const status of await lines.locator('td[data-column="status"]').allTextContents()) {
@@ -187,11 +187,11 @@ describe(`BOM check against ${BASE_URL}`, () => {
       await page.getByRole('button', { name: 'Check and save' }).click();
       await page.getByRole('heading', { level: 1, name: 'trémolo-fr' }).waitFor();
       const lines = page.getByRole('table', { name: 'Lines of trémolo-fr' });
-      const status = (text: string) => lines.locator('tbody tr[data-line-id]').filter({ hasText: text }).locator('td[data-column="status"]').textContent();
+      const status = (text: string) => lines.locator('tbody tr[data-row-id]').filter({ hasText: text }).locator('td[data-column="status"]').textContent();
       expect(await status('hv4558')).toBe('At risk');
       expect(await status('TS16-B10K')).toBe('OK');
       expect(await status('RC0805-10K')).toBe('Not in catalog');
-      expect(await lines.locator('tbody tr[data-line-id]').filter({ hasText: 'RC0805-10K' }).textContent()).toContain('R1, R2, R3, R4');
+      expect(await lines.locator('tbody tr[data-row-id]').filter({ hasText: 'RC0805-10K' }).textContent()).toContain('R1, R2, R3, R4');
       await screenshot(page, 'bom-uploaded-1252');
     } finally {
       await context.close();

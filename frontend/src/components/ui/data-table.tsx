@@ -8,6 +8,7 @@ import {
 } from '@tanstack/react-table';
 import { useState, type ReactNode } from 'react';
 import { cx } from './cx';
+import { HeaderCell } from './expandable-table';
 
 export interface DataTableProps<T> {
   data: T[];
@@ -18,15 +19,6 @@ export interface DataTableProps<T> {
   initialSorting?: SortingState;
   /** Highlights a row, e.g. the signed-in person's own. */
   isRowHighlighted?: (row: T) => boolean;
-}
-
-function SortIcon({ direction }: { direction: false | 'asc' | 'desc' }) {
-  return (
-    <svg aria-hidden="true" viewBox="0 0 10 14" className="size-3 shrink-0">
-      <path d="M5 1 9 5.5H1z" className={direction === 'asc' ? 'fill-copper' : 'fill-ink/25'} />
-      <path d="M5 13 1 8.5h8z" className={direction === 'desc' ? 'fill-copper' : 'fill-ink/25'} />
-    </svg>
-  );
 }
 
 /** A sortable table: click a column heading (or press Enter on it) to sort; the state is announced with aria-sort. */
@@ -50,32 +42,9 @@ export function DataTable<T>({ data, columns, caption, getRowId, initialSorting 
         <thead>
           {table.getHeaderGroups().map((group) => (
             <tr key={group.id} className="border-b border-rule bg-paper/60">
-              {group.headers.map((header) => {
-                const sorted = header.column.getIsSorted();
-                const canSort = header.column.getCanSort();
-                const label = header.isPlaceholder ? null : flexRender(header.column.columnDef.header, header.getContext());
-                return (
-                  <th
-                    key={header.id}
-                    scope="col"
-                    aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : canSort ? 'none' : undefined}
-                    className="px-4 py-2.5 text-xs font-semibold tracking-wider whitespace-nowrap text-ink-soft uppercase"
-                  >
-                    {canSort ? (
-                      <button
-                        type="button"
-                        onClick={header.column.getToggleSortingHandler()}
-                        className="-mx-1 inline-flex items-center gap-1.5 rounded px-1 uppercase hover:text-ink"
-                      >
-                        {label}
-                        <SortIcon direction={sorted} />
-                      </button>
-                    ) : (
-                      label
-                    )}
-                  </th>
-                );
-              })}
+              {group.headers.map((header) => (
+                <HeaderCell key={header.id} header={header} className="px-4" />
+              ))}
             </tr>
           ))}
         </thead>

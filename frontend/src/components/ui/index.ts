@@ -16,3 +16,4 @@ export * from './pinout-diagram';
 export * from './cadmium-caution';
 export * from './score-bar';
 export * from './equivalent-flag';
+export * from './expandable-table';

@@ -1,9 +1,8 @@
 import { createColumnHelper, type ColumnDef, type Table } from '@tanstack/react-table';
 import { MAX_COMPARE, type CandidatePart, type RankedAlternate } from '@understudy/shared-types';
 import { PartCell } from './part-cell';
-import { LifecycleBadge, ScoreBar } from '../../../components/ui';
+import { type ColumnMeta, ExpandableTable, LifecycleBadge, ScoreBar } from '../../../components/ui';
 import { AlternateDetails } from './alternate-details';
-import { ExpandableTable, type ColumnMeta } from './expandable-table';
 import { PinoutClassBadge } from './pinout-class-badge';
 import { RulingControls } from './ruling-controls';
 

@@ -1,9 +1,8 @@
 import { createColumnHelper, type ColumnDef } from '@tanstack/react-table';
 import { formatQuantity, type CandidatePart, type RankedPair, type RankedPairs } from '@understudy/shared-types';
 import { useId, type ReactNode } from 'react';
-import { Card, EmptyState, LifecycleBadge, RohsBadge, ScoreBar, SectionHeading } from '../../../components/ui';
+import { Card, type ColumnMeta, EmptyState, ExpandableTable, LifecycleBadge, RohsBadge, ScoreBar, SectionHeading } from '../../../components/ui';
 import { BreakdownTable } from './alternate-details';
-import { ExpandableTable, type ColumnMeta } from './expandable-table';
 import { PartCell } from './part-cell';
 
 const ohms = (v: number) => (Number.isFinite(v) ? formatQuantity(v, 'Ω', { digits: 2 }) : 'open circuit');

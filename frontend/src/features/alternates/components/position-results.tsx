@@ -2,10 +2,9 @@ import { createColumnHelper, type ColumnDef } from '@tanstack/react-table';
 import { formatQuantity, type DerivedNeed, type Margin, type PositionMatch, type PositionResults } from '@understudy/shared-types';
 import { useMemo } from 'react';
 import { PartCell } from './part-cell';
-import { Badge, cx, EmptyState, LifecycleBadge, ScoreBar } from '../../../components/ui';
+import { Badge, type ColumnMeta, cx, EmptyState, ExpandableTable, LifecycleBadge, ScoreBar } from '../../../components/ui';
 import { pinLayoutFor } from '../../../lib/part-display';
 import { formatNeedMargin } from '../lib/display';
-import { ExpandableTable, type ColumnMeta } from './expandable-table';
 import { UnsuitableList } from './unsuitable-list';
 
 const DISPLAY_UNITS: Record<string, string> = { 'V/s': 'V/µs', A: 'mA' };

@@ -1,5 +1,4 @@
 import {
-  flexRender,
   getCoreRowModel,
   getPaginationRowModel,
   getSortedRowModel,
@@ -11,9 +10,9 @@ import {
   type Table,
 } from '@tanstack/react-table';
 import type { BomLineDto } from '@understudy/shared-types';
-import { Fragment, useEffect, useId, useState, type ReactNode } from 'react';
+import { useEffect, useState, type ReactNode } from 'react';
 import { Link } from 'react-router';
-import { Button, CadmiumMark, InlineSelect, cx } from '../../../components/ui';
+import { Button, CadmiumMark, ExpandableTableView, InlineSelect } from '../../../components/ui';
 import { compareWorstFirst, matchKindText } from '../lib/lines';
 import { LineStatusBadge } from './line-status-badge';
 
@@ -24,23 +23,6 @@ interface LinesTableMeta {
 }
 
 const metaOf = (table: Table<BomLineDto>) => table.options.meta as LinesTableMeta;
-
-function Chevron({ open }: { open: boolean }) {
-  return (
-    <svg aria-hidden="true" viewBox="0 0 12 12" className={cx('size-3 transition-transform motion-reduce:transition-none', open && 'rotate-90')}>
-      <path d="M4 2 8 6 4 10" fill="none" stroke="currentColor" strokeWidth="1.8" strokeLinecap="round" strokeLinejoin="round" />
-    </svg>
-  );
-}
-
-function SortIcon({ direction }: { direction: false | 'asc' | 'desc' }) {
-  return (
-    <svg aria-hidden="true" viewBox="0 0 10 14" className="size-3 shrink-0">
-      <path d="M5 1 9 5.5H1z" className={direction === 'asc' ? 'fill-copper' : 'fill-ink/25'} />
-      <path d="M5 13 1 8.5h8z" className={direction === 'desc' ? 'fill-copper' : 'fill-ink/25'} />
-    </svg>
-  );
-}
 
 const dash = <span className="text-ink-faint">—</span>;
 
@@ -167,7 +149,6 @@ export function BomLinesTable({
   resetKey: string;
   caption: string;
 }) {
-  const baseId = useId();
   const [sorting, setSorting] = useState<SortingState>([{ id: 'status', desc: false }]);
   const [expanded, setExpanded] = useState<ExpandedState>({});
   const [pagination, setPagination] = useState<PaginationState>({ pageIndex: 0, pageSize: 100 });
@@ -198,7 +179,6 @@ export function BomLinesTable({
     getPaginationRowModel: getPaginationRowModel(),
   });
 
-  const span = table.getVisibleLeafColumns().length + 1;
   const total = lines.length;
   const { pageIndex, pageSize } = table.getState().pagination;
   const first = total === 0 ? 0 : pageIndex * pageSize + 1;
@@ -207,88 +187,16 @@ export function BomLinesTable({
 
   return (
     <div className="flex flex-col">
-      <div className="overflow-x-auto">
-        <table className="w-full min-w-[60rem] border-collapse text-left text-sm">
-          <caption className="sr-only">{caption}</caption>
-          <thead>
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id} className="border-b border-rule bg-paper/60">
-                <th scope="col" className="w-10 px-2 py-2.5">
-                  <span className="sr-only">Details</span>
-                </th>
-                {group.headers.map((header) => {
-                  const sorted = header.column.getIsSorted();
-                  const canSort = header.column.getCanSort();
-                  const label = flexRender(header.column.columnDef.header, header.getContext());
-                  return (
-                    <th
-                      key={header.id}
-                      scope="col"
-                      aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : canSort ? 'none' : undefined}
-                      className="px-3 py-2.5 text-xs font-semibold tracking-wider whitespace-nowrap text-ink-soft uppercase"
-                    >
-                      {canSort ? (
-                        <button
-                          type="button"
-                          onClick={header.column.getToggleSortingHandler()}
-                          className="-mx-1 inline-flex items-center gap-1.5 rounded px-1 uppercase hover:text-ink"
-                        >
-                          {label}
-                          <SortIcon direction={sorted} />
-                        </button>
-                      ) : (
-                        label
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {table.getRowModel().rows.map((row) => {
-              const open = row.getIsExpanded();
-              const detailsId = `${baseId}-${row.id}`;
-              return (
-                <Fragment key={row.id}>
-                  <tr
-                    data-line-id={row.id}
-                    data-status={row.original.status}
-                    className={cx('border-b border-rule align-top hover:bg-paper/50', open && 'border-b-0 bg-paper/40')}
-                  >
-                    <td className="px-2 py-2">
-                      <button
-                        type="button"
-                        aria-expanded={open}
-                        aria-controls={open ? detailsId : undefined}
-                        onClick={row.getToggleExpandedHandler()}
-                        className="inline-flex size-7 items-center justify-center rounded-md text-ink-soft hover:bg-paper-deep hover:text-ink"
-                      >
-                        <Chevron open={open} />
-                        <span className="sr-only">
-                          Details for row {row.original.row}, {row.original.partNumber || 'no part number'}
-                        </span>
-                      </button>
-                    </td>
-                    {row.getVisibleCells().map((cell) => (
-                      <td key={cell.id} data-column={cell.column.id} className="px-3 py-2.5">
-                        {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                      </td>
-                    ))}
-                  </tr>
-                  {open && (
-                    <tr id={detailsId} className="border-b border-rule">
-                      <td colSpan={span} className="bg-paper/30 p-0">
-                        {renderDetails(row.original)}
-                      </td>
-                    </tr>
-                  )}
-                </Fragment>
-              );
-            })}
-          </tbody>
-        </table>
-      </div>
+      <ExpandableTableView
+        table={table}
+        caption={caption}
+        rowName={(line) => `row ${line.row}, ${line.partNumber || 'no part number'}`}
+        renderDetails={renderDetails}
+        rowData={(line) => ({ 'data-status': line.status })}
+        verticalAlign="top"
+        minWidth="min-w-[60rem]"
+        detailsClassName="bg-paper/30"
+      />
       {total === 0 && <p className="px-5 py-6 text-center text-sm text-ink-soft">No line matches.</p>}
       {total > 0 && (
         <nav aria-label="Pages of lines" className="flex flex-wrap items-center justify-between gap-3 border-t border-rule px-5 py-3 text-sm">

@@ -102,7 +102,7 @@ function lineRows() {
   const table = screen.getByRole('table', { name: /Lines of/ });
   return within(table)
     .getAllByRole('row')
-    .filter((row) => row.hasAttribute('data-line-id'));
+    .filter((row) => row.hasAttribute('data-row-id'));
 }
 
 function cell(row: HTMLElement, column: string) {
