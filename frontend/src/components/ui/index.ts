@@ -17,3 +17,4 @@ export * from './cadmium-caution';
 export * from './score-bar';
 export * from './equivalent-flag';
 export * from './expandable-table';
+export * from './part-query-state';

@@ -17,3 +17,11 @@ export const bomQueryOptions = (id: string) =>
 export function useBom(id: string) {
   return useQuery(bomQueryOptions(id));
 }
+
+/** What a missing BOM shows: it was deleted, or the link is someone else's that was never shared. */
+export const NO_SUCH_BOM = {
+  title: 'There is no such BOM',
+  backTo: '/boms',
+  backLabel: 'Back to the BOMs',
+  text: 'It may have been deleted, or it is not shared with you.',
+};

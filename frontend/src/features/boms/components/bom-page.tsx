@@ -1,11 +1,10 @@
 import type { BomDetailDto } from '@understudy/shared-types';
 import { useId, useMemo, useState } from 'react';
-import { Link, useSearchParams } from 'react-router';
-import { Card, EmptyState, ErrorState, LoadingState, SectionHeading, buttonClasses } from '../../../components/ui';
+import { useSearchParams } from 'react-router';
+import { Card, RecordQueryState, SectionHeading } from '../../../components/ui';
 import { useAppAbility } from '../../../lib/ability';
-import { isApiClientError } from '../../../lib/api-client';
 import { useDebouncedValue } from '../../../hooks/use-debounced-value';
-import { useBom } from '../api/get-bom';
+import { NO_SUCH_BOM, useBom } from '../api/get-bom';
 import { canChangeBom, ownsBom } from '../lib/access';
 import { RISK_CATEGORIES, isRiskKey, lineMentions, plural, riskCategory, type RiskKey } from '../lib/lines';
 import { BomHeader } from './bom-header';
@@ -94,23 +93,9 @@ function BomView({ bom }: { bom: BomDetailDto }) {
 /** One saved BOM: its risks at a glance, every line with what may replace it, and its history of checks. */
 export function BomPage({ bomId }: { bomId: string }) {
   const bom = useBom(bomId);
-  if (bom.isPending) return <LoadingState label="Loading the BOM…" />;
-  if (bom.isError) {
-    if (isApiClientError(bom.error) && bom.error.status === 404) {
-      return (
-        <EmptyState
-          title="There is no such BOM"
-          action={
-            <Link to="/boms" className={buttonClasses('secondary')}>
-              Back to the BOMs
-            </Link>
-          }
-        >
-          It may have been deleted, or it is not shared with you.
-        </EmptyState>
-      );
-    }
-    return <ErrorState message={bom.error.message} onRetry={() => void bom.refetch()} />;
-  }
-  return <BomView bom={bom.data} />;
+  return (
+    <RecordQueryState query={bom} loadingLabel="Loading the BOM…" missing={NO_SUCH_BOM}>
+      {(bom) => <BomView bom={bom} />}
+    </RecordQueryState>
+  );
 }

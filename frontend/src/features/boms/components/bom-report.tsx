@@ -1,10 +1,9 @@
 import { LIFECYCLE_LABELS, type BomDetailDto } from '@understudy/shared-types';
 import { useMemo } from 'react';
 import { Link } from 'react-router';
-import { Button, CadmiumCaution, EmptyState, ErrorState, LoadingState, buttonClasses } from '../../../components/ui';
-import { isApiClientError } from '../../../lib/api-client';
+import { Button, buttonClasses, CadmiumCaution, RecordQueryState } from '../../../components/ui';
 import { formatDateTime } from '../../../lib/format';
-import { useBom } from '../api/get-bom';
+import { NO_SUCH_BOM, useBom } from '../api/get-bom';
 import { RISK_CATEGORIES, compareWorstFirst } from '../lib/lines';
 import { LineStatusBadge } from './line-status-badge';
 
@@ -127,21 +126,9 @@ function Report({ bom }: { bom: BomDetailDto }) {
 /** The BOM as a document to print or save as PDF: the app around it is hidden on paper. */
 export function BomReport({ bomId }: { bomId: string }) {
   const bom = useBom(bomId);
-  if (bom.isPending) return <LoadingState label="Loading the report…" />;
-  if (bom.isError) {
-    if (isApiClientError(bom.error) && bom.error.status === 404) {
-      return (
-        <EmptyState
-          title="There is no such BOM"
-          action={
-            <Link to="/boms" className={buttonClasses('secondary')}>
-              Back to the BOMs
-            </Link>
-          }
-        />
-      );
-    }
-    return <ErrorState message={bom.error.message} onRetry={() => void bom.refetch()} />;
-  }
-  return <Report bom={bom.data} />;
+  return (
+    <RecordQueryState query={bom} loadingLabel="Loading the report…" missing={NO_SUCH_BOM}>
+      {(bom) => <Report bom={bom} />}
+    </RecordQueryState>
+  );
 }
