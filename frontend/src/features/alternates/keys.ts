@@ -12,7 +12,6 @@ export const alternatesKeys = {
   rank: (requirements: PositionRequirementsInput) => [...alternatesKeys.ranks(), requirements] as const,
   /** Parts this feature shows around a ranking (the original, a paired LED) and searches for pickers. */
   part: (id: string) => [...alternatesKeys.all, 'part', id] as const,
-  partSearch: (query: Record<string, string>) => [...alternatesKeys.all, 'part-search', query] as const,
 };
 
 export const equivalentKeys = {

@@ -13,5 +13,4 @@ export const bomKeys = {
   /** Under the BOM's key, so a re-check refreshes what each line may be replaced by. */
   options: (bomId: string, lineId: string) => [...bomKeys.detail(bomId), 'options', lineId] as const,
   colleagues: () => [...bomKeys.all, 'colleagues'] as const,
-  partSearch: (query: Record<string, string>) => [...bomKeys.all, 'part-search', query] as const,
 };

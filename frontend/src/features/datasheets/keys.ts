@@ -15,6 +15,5 @@ export const datasheetKeys = {
   /** The mutation key of decisions on one datasheet, to tell whether others are still in flight. */
   review: (id: string) => [...datasheetKeys.detail(id), 'review'] as const,
   /** Parts offered as the target of an apply, and the chosen one as it is now. */
-  partSearch: (query: Record<string, string>) => [...datasheetKeys.all, 'part-search', query] as const,
   targetPart: (id: string) => [...datasheetKeys.all, 'target-part', id] as const,
 };

@@ -4,7 +4,7 @@ import { Button, CadmiumMark, LifecycleBadge, Spinner, cx } from '../../../compo
 import { useDebouncedValue } from '../../../hooks/use-debounced-value';
 import { containsCadmium } from '../../../lib/part-display';
 import { usePart } from '../api/get-part';
-import { usePartSearch } from '../api/search-parts';
+import { usePartSearch } from '../../../hooks/use-part-search';
 
 /** Mid-sentence: "Photoresistors" reads "photoresistors", "Paired LED" "paired LED", "LEDs" stays. */
 const inSentence = (label: string) => (/^[A-Z][a-z]/.test(label) ? label.charAt(0).toLowerCase() + label.slice(1) : label);
@@ -37,7 +37,7 @@ export function PartPicker({
   const byId = usePart(typeof value === 'string' ? value : undefined);
   const chosen = typeof value === 'string' ? byId.data : value;
   const open = searching || value === null;
-  const results = usePartSearch(debounced, family);
+  const results = usePartSearch(debounced, family, { listWithoutText: true });
 
   return (
     <div className={cx('flex flex-col gap-1.5', className)} role="group" aria-labelledby={`${inputId}-label`}>

@@ -6,7 +6,7 @@ import { useDebouncedValue } from '../../../hooks/use-debounced-value';
 import { formatDateTime } from '../../../lib/format';
 import { containsCadmium } from '../../../lib/part-display';
 import { useLineOptions } from '../api/get-line-options';
-import { usePartSearch } from '../api/search-parts';
+import { usePartSearch } from '../../../hooks/use-part-search';
 import { useUpdateBomLine } from '../api/update-bom-line';
 import { matchKindText } from '../lib/lines';
 

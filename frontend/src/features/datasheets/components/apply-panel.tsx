@@ -17,7 +17,7 @@ import { formatDateTime } from '../../../lib/format';
 import { packageLabel } from '../../../lib/part-display';
 import { isApplyConflictError, useApplyDatasheet } from '../api/apply-datasheet';
 import { useTargetPart } from '../api/get-target-part';
-import { usePartSearch } from '../api/search-parts';
+import { usePartSearch } from '../../../hooks/use-part-search';
 import { useDebouncedValue } from '../../../hooks/use-debounced-value';
 import { diffAgainst, type DiffLine } from '../lib/proposals';
 
